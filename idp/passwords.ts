@@ -1,0 +1,219 @@
+import { createHash, randomBytes } from 'node:crypto';
+import { Router, urlencoded } from 'express';
+import { rateLimit } from 'express-rate-limit';
+import type { Knex } from 'knex';
+import { z } from 'zod';
+import { recordAuditEntry } from '../server/audit/repository';
+import type { Mailer } from '../server/mail/mailer';
+import { clearFailedAttempts, findAccountByEmail, hashPassword } from './account';
+import { forgotPasswordPage, messagePage, resetPasswordPage } from './views/pages';
+
+export interface PasswordRouterDeps {
+  db: Knex;
+  mailer: Mailer;
+  issuer: string;
+  appUrl: string;
+  requestsPerWindow: number;
+}
+
+const RESET_MINUTES = 30;
+const TOKEN = /^[A-Za-z0-9_-]{43}$/;
+
+const forgotForm = z.object({ email: z.string().trim().max(320).default('') });
+const resetForm = z.object({
+  password: z.string().max(1024).default(''),
+  confirm: z.string().max(1024).default(''),
+});
+
+const sha256 = (value: string) => createHash('sha256').update(value).digest('hex');
+
+/** Creates a single-use link token; only its hash is stored. Invitations use the same table. */
+export async function issuePasswordToken(
+  db: Knex,
+  accountId: string,
+  purpose: 'reset' | 'invitation',
+  validMinutes: number,
+): Promise<string> {
+  const token = randomBytes(32).toString('base64url');
+  await db('idp.password_tokens').insert({
+    account_id: accountId,
+    purpose,
+    token_hash: sha256(token),
+    expires_at: new Date(Date.now() + validMinutes * 60 * 1000),
+  });
+  return token;
+}
+
+interface TokenRow {
+  id: string;
+  account_id: string;
+  purpose: 'reset' | 'invitation';
+}
+
+async function usableToken(db: Knex, token: string): Promise<TokenRow | undefined> {
+  if (!TOKEN.test(token)) return undefined;
+  return db('idp.password_tokens')
+    .where({ token_hash: sha256(token) })
+    .whereNull('used_at')
+    .where('expires_at', '>', db.fn.now())
+    .first<TokenRow | undefined>('id', 'account_id', 'purpose');
+}
+
+export function passwordProblem(
+  password: string,
+  confirm: string,
+  email: string,
+): string | undefined {
+  if (password.length < 12) return 'Use at least 12 characters.';
+  if (password !== confirm) return 'The two passwords are not the same.';
+  if (password.toLowerCase().includes(email.split('@')[0]!.toLowerCase())) {
+    return 'Do not build the password from your e-mail address.';
+  }
+  return undefined;
+}
+
+export function createPasswordRouter(deps: PasswordRouterDeps): Router {
+  const { db } = deps;
+  const router = Router();
+  const form = urlencoded({ extended: false, limit: '10kb' });
+  const limit = rateLimit({
+    windowMs: 15 * 60 * 1000,
+    limit: deps.requestsPerWindow,
+    standardHeaders: 'draft-8',
+    legacyHeaders: false,
+    handler: (_req, res) => {
+      res
+        .status(429)
+        .type('html')
+        .send(
+          forgotPasswordPage({
+            error: 'Too many requests from this network. Wait 15 minutes and try again.',
+          }),
+        );
+    },
+  });
+  const expired = messagePage({
+    title: 'This link no longer works',
+    message:
+      'Password links work once and for 30 minutes. Ask for a new one and use the newest e-mail.',
+    link: { href: '/password/forgot', text: 'Send a new link' },
+  });
+
+  router.get('/password/forgot', (_req, res) => {
+    res.type('html').send(forgotPasswordPage());
+  });
+
+  router.post('/password/forgot', limit, form, async function requestReset(req, res) {
+    const { email } = forgotForm.parse(req.body ?? {});
+    if (!z.email().safeParse(email).success) {
+      res
+        .status(400)
+        .type('html')
+        .send(forgotPasswordPage({ email, error: 'Enter a valid e-mail address.' }));
+      return;
+    }
+    const account = await findAccountByEmail(db, email);
+    if (account) {
+      const token = await issuePasswordToken(db, account.id, 'reset', RESET_MINUTES);
+      const link = `${deps.issuer}/password/reset/${token}`;
+      await deps.mailer.send({
+        to: account.email,
+        subject: 'Reset your Wardbook password',
+        text: [
+          `Hello ${account.display_name},`,
+          '',
+          `Someone asked to reset the password for this Wardbook account. To choose a new one, open this link within ${RESET_MINUTES} minutes:`,
+          '',
+          link,
+          '',
+          'If it was not you, ignore this e-mail; your password stays as it is.',
+        ].join('\n'),
+      });
+      await recordAuditEntry(db, {
+        action: 'password_reset.requested',
+        actorLabel: account.email,
+        entityType: 'account',
+        entityId: account.id,
+        summary: `Password reset link sent to ${account.email}`,
+        ip: req.ip,
+      });
+    }
+    // The same answer whether or not the address is known, so accounts cannot be discovered.
+    res.type('html').send(
+      messagePage({
+        title: 'Check your e-mail',
+        message: `If ${email} has a Wardbook account, a link to reset its password is on its way. It works for ${RESET_MINUTES} minutes.`,
+      }),
+    );
+  });
+
+  router.get('/password/reset/:token', async function showReset(req, res) {
+    const token = String(req.params.token);
+    const row = await usableToken(db, token);
+    if (!row) {
+      res.status(410).type('html').send(expired);
+      return;
+    }
+    res
+      .set('Cache-Control', 'no-store')
+      .type('html')
+      .send(resetPasswordPage({ token, purpose: row.purpose }));
+  });
+
+  router.post('/password/reset/:token', limit, form, async function saveReset(req, res) {
+    const token = String(req.params.token);
+    const row = await usableToken(db, token);
+    if (!row) {
+      res.status(410).type('html').send(expired);
+      return;
+    }
+    const { password, confirm } = resetForm.parse(req.body ?? {});
+    const account = await db('idp.accounts')
+      .where({ id: row.account_id })
+      .first<{ email: string }>('email');
+    const problem = passwordProblem(password, confirm, account?.email ?? '');
+    if (problem) {
+      res
+        .status(400)
+        .type('html')
+        .send(resetPasswordPage({ token, purpose: row.purpose, error: problem }));
+      return;
+    }
+    const passwordHash = await hashPassword(password);
+    await db.transaction(async (trx) => {
+      const claimed = await trx('idp.password_tokens')
+        .where({ id: row.id })
+        .whereNull('used_at')
+        .update({ used_at: trx.fn.now() });
+      if (claimed !== 1) return;
+      await trx('idp.accounts').where({ id: row.account_id }).update({
+        password_hash: passwordHash,
+        password_changed_at: trx.fn.now(),
+        updated_at: trx.fn.now(),
+      });
+      // Anyone signed in with the old password is signed out everywhere.
+      await trx('idp.oidc_payloads')
+        .where({ model: 'Session' })
+        .whereRaw(`payload->>'accountId' = ?`, [row.account_id])
+        .delete();
+      await recordAuditEntry(trx, {
+        action: 'password.changed',
+        actorLabel: account?.email ?? null,
+        entityType: 'account',
+        entityId: row.account_id,
+        summary: `Password ${row.purpose === 'invitation' ? 'set after invitation' : 'reset'} for ${account?.email}`,
+        ip: req.ip,
+      });
+    });
+    await clearFailedAttempts(db, row.account_id);
+    res.type('html').send(
+      messagePage({
+        title: 'Password saved',
+        message: 'Your new password is ready. Sign in to Wardbook with it.',
+        link: { href: `${deps.appUrl}/auth/login`, text: 'Sign in to Wardbook' },
+      }),
+    );
+  });
+
+  return router;
+}

@@ -1,0 +1,108 @@
+import { existsSync } from 'node:fs';
+import path from 'node:path';
+import express, { type Express } from 'express';
+import type { Store } from 'express-session';
+import helmet from 'helmet';
+import type { Knex } from 'knex';
+import type { Logger } from 'pino';
+import { csrfSync } from 'csrf-sync';
+import { loadCurrentUser } from './auth/current-user';
+import type { OidcClient } from './auth/oidc-client';
+import { createAuthRouter } from './auth/routes';
+import { sessionMiddleware } from './auth/session';
+import { createHealthRouter } from './health/routes';
+import { createHomesRouter } from './homes/routes';
+import { requestLogger } from './http/logger';
+import { apiNotFound, problemHandler } from './http/problem-handler';
+import { createMeRouter } from './me/routes';
+
+export interface AppDeps {
+  db: Knex;
+  logger: Logger;
+  oidc: OidcClient;
+  sessionStore: Store;
+  sessionSecret: string;
+  /** Browser-facing origins; the first is canonical. Cookies go secure when it is https. */
+  appOrigins: string[];
+  /** Folder of the built client (vite build). Omitted in API-only tests. */
+  clientDir?: string;
+}
+
+/** Builds the Wardbook API and web app. It never listens; server/index.ts does. */
+export function createApp(deps: AppDeps): Express {
+  const app = express();
+  const secure = deps.appOrigins[0]!.startsWith('https:');
+  app.disable('x-powered-by');
+  app.set('trust proxy', 'loopback');
+
+  app.use(requestLogger(deps.logger));
+  app.use(
+    helmet({
+      contentSecurityPolicy: {
+        useDefaults: false,
+        directives: {
+          defaultSrc: ["'self'"],
+          scriptSrc: ["'self'"],
+          styleSrc: ["'self'"],
+          imgSrc: ["'self'", 'data:', 'blob:'],
+          fontSrc: ["'self'"],
+          connectSrc: ["'self'"],
+          objectSrc: ["'none'"],
+          baseUri: ["'self'"],
+          formAction: ["'self'"],
+          frameAncestors: ["'none'"],
+          ...(secure ? { upgradeInsecureRequests: [] } : {}),
+        },
+      },
+      // HSTS on plain-HTTP loopback would only confuse browsers during development.
+      strictTransportSecurity: secure,
+      referrerPolicy: { policy: 'same-origin' },
+    }),
+  );
+
+  // --- Health and static files: no session needed --------------------------------------------
+  app.use(createHealthRouter(deps));
+  const clientIndex = deps.clientDir ? path.join(deps.clientDir, 'index.html') : undefined;
+  if (deps.clientDir) {
+    app.use(
+      '/assets',
+      express.static(path.join(deps.clientDir, 'assets'), { immutable: true, maxAge: '1y' }),
+    );
+    app.use(express.static(deps.clientDir, { index: false }));
+  }
+
+  // --- Sessions, the signed-in user and CSRF ---------------------------------------------------
+  app.use(express.json({ limit: '100kb' }));
+  app.use(
+    sessionMiddleware({
+      store: deps.sessionStore,
+      secret: deps.sessionSecret,
+      secureCookies: secure,
+    }),
+  );
+  app.use(loadCurrentUser(deps.db));
+  const csrf = csrfSync({
+    getTokenFromRequest: (req) => req.get('x-csrf-token'),
+  });
+  app.use(['/api', '/auth/logout'], csrf.csrfSynchronisedProtection);
+
+  // --- Routes ----------------------------------------------------------------------------------
+  app.use(createAuthRouter({ ...deps, appOrigins: deps.appOrigins }));
+  app.use(
+    createMeRouter({ generateCsrfToken: (req) => csrf.generateToken(req as express.Request) }),
+  );
+  app.use(createHomesRouter(deps));
+  app.use('/api', apiNotFound);
+
+  // --- The single-page app answers every other GET ---------------------------------------------
+  app.get(/^(?!\/(api|auth)\/).*/, function clientPage(_req, res) {
+    if (!clientIndex || !existsSync(clientIndex)) {
+      res.status(503).type('text').send('The Wardbook client is not built yet. Run: npm run build');
+      return;
+    }
+    res.set('Cache-Control', 'no-cache').sendFile(clientIndex);
+  });
+
+  app.use(problemHandler(deps.logger));
+  return app;
+}

@@ -1,0 +1,23 @@
+import knex, { type Knex } from 'knex';
+import pg from 'pg';
+
+export interface DatabaseConnection {
+  host: string;
+  port: number;
+  user: string;
+  database: string;
+  password?: string;
+}
+
+// Counts and bigint ids arrive as strings by default; Wardbook's counts fit in a JS number.
+pg.types.setTypeParser(pg.types.builtins.INT8, (value) => Number(value));
+
+export function knexConfig(connection: DatabaseConnection, poolMax = 10): Knex.Config {
+  return { client: 'pg', connection, pool: { min: 0, max: poolMax } };
+}
+
+export function createDb(connection: DatabaseConnection, poolMax?: number): Knex {
+  return knex(knexConfig(connection, poolMax));
+}
+
+export type Db = Knex;

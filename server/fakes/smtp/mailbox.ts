@@ -1,0 +1,100 @@
+import { simpleParser } from 'mailparser';
+import { SMTPServer } from 'smtp-server';
+import type { Readable } from 'node:stream';
+
+export interface CapturedMail {
+  id: number;
+  receivedAt: string;
+  from: string;
+  to: string[];
+  subject: string;
+  text: string;
+  html: string | null;
+  attachments: { filename: string; contentType: string; size: number }[];
+}
+
+const KEEP = 500;
+
+/**
+ * A local stand-in for an SMTP relay: accepts every message on loopback, keeps the newest in
+ * memory, and lets people (the viewer) and tests read what arrived.
+ */
+export class Mailbox {
+  private nextId = 1;
+  private mails: CapturedMail[] = [];
+  private waiters = new Set<() => void>();
+
+  list(): CapturedMail[] {
+    return [...this.mails].reverse();
+  }
+
+  get(id: number): CapturedMail | undefined {
+    return this.mails.find((mail) => mail.id === id);
+  }
+
+  clear() {
+    this.mails = [];
+  }
+
+  async add(stream: Readable) {
+    const parsed = await simpleParser(stream);
+    const to = (Array.isArray(parsed.to) ? parsed.to : parsed.to ? [parsed.to] : []).flatMap(
+      (address) => address.value.map((entry) => entry.address ?? ''),
+    );
+    this.mails.push({
+      id: this.nextId++,
+      receivedAt: new Date().toISOString(),
+      from: parsed.from?.text ?? '',
+      to,
+      subject: parsed.subject ?? '',
+      text: parsed.text ?? '',
+      html: typeof parsed.html === 'string' ? parsed.html : null,
+      attachments: parsed.attachments.map((attachment) => ({
+        filename: attachment.filename ?? 'attachment',
+        contentType: attachment.contentType,
+        size: attachment.size,
+      })),
+    });
+    if (this.mails.length > KEEP) this.mails.splice(0, this.mails.length - KEEP);
+    for (const wake of this.waiters) wake();
+  }
+
+  /** Resolves with the first message to `address` matching the filter, waiting if needed. */
+  waitFor(predicate: (mail: CapturedMail) => boolean, timeoutMs = 10_000): Promise<CapturedMail> {
+    return new Promise((resolve, reject) => {
+      const check = () => {
+        const found = this.mails.find(predicate);
+        if (!found) return false;
+        cleanup();
+        resolve(found);
+        return true;
+      };
+      const timer = setTimeout(() => {
+        cleanup();
+        reject(new Error('no matching e-mail arrived in time'));
+      }, timeoutMs);
+      const cleanup = () => {
+        clearTimeout(timer);
+        this.waiters.delete(wake);
+      };
+      const wake = () => void check();
+      if (!check()) this.waiters.add(wake);
+    });
+  }
+}
+
+export function createSmtpServer(mailbox: Mailbox): SMTPServer {
+  return new SMTPServer({
+    authOptional: true,
+    disabledCommands: ['STARTTLS'],
+    banner: 'Wardbook local mail catcher',
+    logger: false,
+    size: 25 * 1024 * 1024,
+    onData(stream, _session, callback) {
+      mailbox.add(stream).then(
+        () => callback(),
+        (error: Error) => callback(error),
+      );
+    },
+  });
+}

@@ -1,0 +1,46 @@
+import { createServer } from 'node:http';
+import pg from 'pg';
+import { createApp } from './app';
+import { createOidcClient } from './auth/oidc-client';
+import { createSessionStore } from './auth/session';
+import { loadConfig } from './config/config';
+import { loadOrCreateSecrets } from './config/secrets';
+import { createDb } from './db/knex';
+import { createLogger } from './http/logger';
+import { OIDC_CLIENT_ID } from '../idp/clients';
+
+// The API process: configuration, dependencies, listen, and a clean stop on SIGINT/SIGTERM.
+const config = loadConfig();
+const logger = createLogger(config.logLevel, 'api');
+const secrets = loadOrCreateSecrets(config.dataDir);
+const db = createDb(config.postgres);
+const sessionPool = new pg.Pool({ ...config.postgres, max: 5 });
+
+const app = createApp({
+  db,
+  logger,
+  oidc: createOidcClient({
+    issuer: config.idp.issuer,
+    clientId: OIDC_CLIENT_ID,
+    clientSecret: secrets.oidcClientSecret,
+  }),
+  sessionStore: createSessionStore(sessionPool),
+  sessionSecret: secrets.sessionSecret,
+  appOrigins: config.idp.appOrigins,
+  clientDir: config.api.clientDir,
+});
+
+const server = createServer(app);
+server.listen(config.api.port, '127.0.0.1', () => {
+  logger.info(`API listening on http://127.0.0.1:${config.api.port}`);
+});
+
+async function shutdown(signal: string) {
+  logger.info({ signal }, 'API stopping');
+  server.close();
+  server.closeIdleConnections();
+  await Promise.allSettled([db.destroy(), sessionPool.end()]);
+  process.exit(0);
+}
+process.once('SIGINT', () => void shutdown('SIGINT'));
+process.once('SIGTERM', () => void shutdown('SIGTERM'));

@@ -1,0 +1,14 @@
+import type { DatabaseConnection } from '../../server/db/knex';
+
+export interface StackUrls {
+  apiUrl: string;
+  idpUrl: string;
+  mailUrl: string;
+}
+
+declare module 'vitest' {
+  export interface ProvidedContext {
+    database: DatabaseConnection;
+    stack: StackUrls;
+  }
+}

@@ -1,0 +1,108 @@
+import { createServer } from 'node:http';
+import type { AddressInfo } from 'node:net';
+import pg from 'pg';
+import { createApp } from '../../server/app';
+import { createOidcClient } from '../../server/auth/oidc-client';
+import { createSessionStore } from '../../server/auth/session';
+import { generateSecrets } from '../../server/config/secrets';
+import { createDb, type DatabaseConnection } from '../../server/db/knex';
+import { createMailViewer } from '../../server/fakes/smtp/viewer';
+import { createSmtpServer, Mailbox } from '../../server/fakes/smtp/mailbox';
+import { createLogger } from '../../server/http/logger';
+import { createSmtpMailer } from '../../server/mail/mailer';
+import { createIdpApp } from '../../idp/app';
+import { OIDC_CLIENT_ID } from '../../idp/clients';
+import { generateSigningKeys } from '../../idp/keys';
+
+export interface RunningStack {
+  apiUrl: string;
+  idpUrl: string;
+  mailUrl: string;
+  mailbox: Mailbox;
+  stop(): Promise<void>;
+}
+
+function portOf(server: { address(): string | AddressInfo | null }) {
+  return (server.address() as AddressInfo).port;
+}
+
+/**
+ * The whole of Wardbook in this process, on free loopback ports: mail catcher, identity
+ * provider and API (optionally serving a built client), each built the way its own process
+ * builds it. Fresh secrets and signing keys every time.
+ */
+export async function startStack(options: {
+  database: DatabaseConnection;
+  clientDir?: string;
+  attemptsPerWindow?: number;
+}): Promise<RunningStack> {
+  const logger = createLogger(process.env.WARDBOOK_TEST_LOG_LEVEL ?? 'silent', 'test');
+  const apiServer = createServer();
+  const idpServer = createServer();
+  const viewerServer = createServer();
+  for (const server of [apiServer, idpServer, viewerServer]) {
+    await new Promise<void>((resolve) => server.listen(0, '127.0.0.1', () => resolve()));
+  }
+  const mailbox = new Mailbox();
+  const smtp = createSmtpServer(mailbox);
+  await new Promise<void>((resolve) => smtp.listen(0, '127.0.0.1', () => resolve()));
+  const smtpPort = portOf(smtp.server);
+
+  const apiUrl = `http://127.0.0.1:${portOf(apiServer)}`;
+  const idpUrl = `http://127.0.0.1:${portOf(idpServer)}`;
+  const mailUrl = `http://127.0.0.1:${portOf(viewerServer)}`;
+  const secrets = generateSecrets();
+  const db = createDb(options.database, 10);
+  const mailer = createSmtpMailer({
+    host: '127.0.0.1',
+    port: smtpPort,
+    from: 'Wardbook <no-reply@wardbook.example.com>',
+  });
+
+  const { app: idpApp } = createIdpApp({
+    db,
+    logger,
+    mailer,
+    issuer: idpUrl,
+    jwks: await generateSigningKeys(),
+    cookieKeys: secrets.idpCookieKeys,
+    clientSecret: secrets.oidcClientSecret,
+    pendingLoginKey: secrets.idpPendingLoginKey,
+    appOrigins: [apiUrl],
+    attemptsPerWindow: options.attemptsPerWindow,
+  });
+  idpServer.on('request', idpApp);
+
+  const sessionPool = new pg.Pool({ ...options.database, max: 5 });
+  const app = createApp({
+    db,
+    logger,
+    oidc: createOidcClient({
+      issuer: idpUrl,
+      clientId: OIDC_CLIENT_ID,
+      clientSecret: secrets.oidcClientSecret,
+    }),
+    sessionStore: createSessionStore(sessionPool),
+    sessionSecret: secrets.sessionSecret,
+    appOrigins: [apiUrl],
+    clientDir: options.clientDir,
+  });
+  apiServer.on('request', app);
+  viewerServer.on('request', createMailViewer(mailbox));
+
+  return {
+    apiUrl,
+    idpUrl,
+    mailUrl,
+    mailbox,
+    async stop() {
+      for (const server of [apiServer, idpServer, viewerServer]) {
+        server.closeAllConnections();
+        await new Promise((resolve) => server.close(resolve));
+      }
+      await new Promise((resolve) => smtp.close(() => resolve(undefined)));
+      mailer.close();
+      await Promise.all([db.destroy(), sessionPool.end()]);
+    },
+  };
+}

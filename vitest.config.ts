@@ -1,0 +1,39 @@
+import { defineConfig } from 'vitest/config';
+
+// Three projects: pure unit tests, API tests against a real PostgreSQL, and browser tests
+// driving Debian's Chromium through the real sign-in pages.
+export default defineConfig({
+  test: {
+    projects: [
+      {
+        test: {
+          name: 'unit',
+          include: ['tests/unit/**/*.test.ts', 'server/**/*.test.ts', 'idp/**/*.test.ts'],
+          environment: 'node',
+        },
+      },
+      {
+        test: {
+          name: 'api',
+          include: ['tests/api/**/*.test.ts'],
+          environment: 'node',
+          globalSetup: ['tests/setup/global-database.ts'],
+          testTimeout: 30_000,
+          hookTimeout: 60_000,
+        },
+      },
+      {
+        test: {
+          name: 'e2e',
+          include: ['tests/e2e/**/*.test.ts'],
+          environment: 'node',
+          globalSetup: ['tests/setup/global-database.ts', 'tests/setup/global-stack.ts'],
+          // One browser at a time: the machine has two cores and the stack shares them.
+          fileParallelism: false,
+          testTimeout: 60_000,
+          hookTimeout: 120_000,
+        },
+      },
+    ],
+  },
+});
