@@ -3,11 +3,10 @@ import helmet from 'helmet';
 import type { Knex } from 'knex';
 import Provider from 'oidc-provider';
 import type { Logger } from 'pino';
-import path from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { requestLogger } from '../server/http/logger';
 import type { Mailer } from '../server/mail/mailer';
-import { fontsDir } from '../server/paths';
+import { fontsDir, publicDir } from '../server/paths';
 import { buildConfiguration } from './configuration';
 import { createInteractionRouter } from './interactions';
 import type { Jwks } from './keys';
@@ -76,6 +75,7 @@ export function createIdpApp(deps: IdpDeps): { app: Express; provider: Provider 
   );
 
   app.use('/static/fonts', express.static(fontsDir, { maxAge: '7d' }));
+  app.use('/static/brand', express.static(publicDir, { maxAge: '1d' }));
   app.use('/static', express.static(staticDir, { maxAge: '1h' }));
   app.use(
     createInteractionRouter({
@@ -116,5 +116,3 @@ export function createIdpApp(deps: IdpDeps): { app: Express; provider: Provider 
 
   return { app, provider };
 }
-
-export const idpStaticDir = path.resolve(staticDir);

@@ -66,7 +66,9 @@ export function passwordProblem(
 ): string | undefined {
   if (password.length < 12) return 'Use at least 12 characters.';
   if (password !== confirm) return 'The two passwords are not the same.';
-  if (password.toLowerCase().includes(email.split('@')[0]!.toLowerCase())) {
+  // Short local parts ("jo@…") would flag almost any password, so only longer ones count.
+  const localPart = email.split('@')[0]!.toLowerCase();
+  if (localPart.length >= 4 && password.toLowerCase().includes(localPart)) {
     return 'Do not build the password from your e-mail address.';
   }
   return undefined;

@@ -15,6 +15,7 @@ import { createHomesRouter } from './homes/routes';
 import { requestLogger } from './http/logger';
 import { apiNotFound, problemHandler } from './http/problem-handler';
 import { createMeRouter } from './me/routes';
+import { createOrganisationsRouter } from './organisations/routes';
 
 export interface AppDeps {
   db: Knex;
@@ -92,6 +93,7 @@ export function createApp(deps: AppDeps): Express {
     createMeRouter({ generateCsrfToken: (req) => csrf.generateToken(req as express.Request) }),
   );
   app.use(createHomesRouter(deps));
+  app.use(createOrganisationsRouter(deps));
   app.use('/api', apiNotFound);
 
   // --- The single-page app answers every other GET ---------------------------------------------
@@ -100,7 +102,8 @@ export function createApp(deps: AppDeps): Express {
       res.status(503).type('text').send('The Wardbook client is not built yet. Run: npm run build');
       return;
     }
-    res.set('Cache-Control', 'no-cache').sendFile(clientIndex);
+    // With `root`, a dot folder in the install path (.data/…) is not mistaken for a dotfile.
+    res.set('Cache-Control', 'no-cache').sendFile('index.html', { root: deps.clientDir });
   });
 
   app.use(problemHandler(deps.logger));

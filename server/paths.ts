@@ -7,3 +7,4 @@ export const repoRoot = path.resolve(fileURLToPath(new URL('..', import.meta.url
 export const migrationsDir = path.join(repoRoot, 'migrations');
 export const seedsDir = path.join(repoRoot, 'seeds');
 export const fontsDir = path.join(repoRoot, 'fonts');
+export const publicDir = path.join(repoRoot, 'public');

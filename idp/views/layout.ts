@@ -1,9 +1,13 @@
 import { html, type SafeHtml } from '../../server/http/html';
 
-const WORDMARK = html`<svg class="mark" viewBox="0 0 32 32" aria-hidden="true" focusable="false">
-  <rect width="32" height="32" rx="6" fill="#14213D"></rect>
-  <path d="M8 9h16v3H8zM8 15h16v3H8zM8 21h10v3H8z" fill="#B7873A"></path>
-</svg>`;
+// The same mark as the app's (public/favicon.svg), served by the IdP under /static/brand.
+const WORDMARK = html`<img
+  class="mark"
+  src="/static/brand/favicon.svg"
+  alt=""
+  width="28"
+  height="28"
+/>`;
 
 export interface PageOptions {
   title: string;
@@ -20,6 +24,7 @@ export function page({ title, body, scripts = [] }: PageOptions): string {
         <meta name="viewport" content="width=device-width, initial-scale=1" />
         <meta name="robots" content="noindex" />
         <title>${title} · Wardbook</title>
+        <link rel="icon" type="image/svg+xml" href="/static/brand/favicon.svg" />
         <link rel="stylesheet" href="/static/idp.css" />
         ${scripts.map((src) => html`<script src="${src}" defer></script>`)}
       </head>

@@ -45,18 +45,25 @@ export async function listAuditForOrganisation(
   db: Knex,
   organisationId: string,
   limit: number,
+  before?: number,
 ): Promise<AuditEntry[]> {
   const members = db('memberships as m')
     .join('users as u', 'u.id', 'm.user_id')
     .where('m.organisation_id', organisationId);
   const rows = await db('audit_log as a')
-    .where('a.organisation_id', organisationId)
-    .orWhereIn('a.actor_user_id', members.clone().select('u.id'))
-    .orWhere((q) =>
-      q
-        .where('a.entity_type', 'account')
-        .whereIn('a.entity_id', members.clone().select('u.idp_subject')),
+    .where((scope) =>
+      scope
+        .where('a.organisation_id', organisationId)
+        .orWhereIn('a.actor_user_id', members.clone().select('u.id'))
+        .orWhere((q) =>
+          q
+            .where('a.entity_type', 'account')
+            .whereIn('a.entity_id', members.clone().select('u.idp_subject')),
+        ),
     )
+    .modify((q) => {
+      if (before) q.where('a.id', '<', before);
+    })
     .orderBy('a.occurred_at', 'desc')
     .orderBy('a.id', 'desc')
     .limit(limit)

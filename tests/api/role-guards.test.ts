@@ -132,6 +132,75 @@ describe('organisation scope', () => {
   });
 });
 
+describe('organisation routes', () => {
+  it('give staff their own organisation and hide every other one behind a 404', async () => {
+    const { agent } = await harness.signedInAs(people.engineer.userId);
+    const own = await agent.get(`/api/organisations/${installer.id}`);
+    expect(own.status).toBe(200);
+    expect(own.body.organisation).toEqual({
+      id: installer.id,
+      name: installer.name,
+      kind: 'installer',
+    });
+    expect(own.body.membersByRole).toEqual({ engineer: 1, office: 1 });
+    for (const other of [
+      rivalInstaller.id,
+      centre.id,
+      '00000000-0000-4000-8000-000000000000',
+      'not-a-uuid',
+    ]) {
+      const refused = await agent.get(`/api/organisations/${other}`);
+      expect(refused.status, other).toBe(404);
+      expect(refused.body.type).toBe('/problems/not-found');
+    }
+  });
+
+  it('refuse organisation routes to homeowners and keyholders by role', async () => {
+    for (const role of ['homeowner', 'keyholder'] as const) {
+      const { agent } = await harness.signedInAs(people[role].userId);
+      expect((await agent.get(`/api/organisations/${installer.id}`)).status).toBe(403);
+      expect((await agent.get(`/api/organisations/${installer.id}/members`)).status).toBe(403);
+    }
+  });
+
+  it('let only the office read the audit log, one page at a time', async () => {
+    const engineer = await harness.signedInAs(people.engineer.userId);
+    expect((await engineer.agent.get(`/api/organisations/${installer.id}/audit`)).status).toBe(403);
+
+    const { agent } = await harness.signedInAs(people.office.userId);
+    for (let i = 0; i < 3; i++) {
+      await db('audit_log').insert({
+        action: 'test.note',
+        organisation_id: installer.id,
+        summary: `note ${i}`,
+      });
+    }
+    const first = await agent.get(`/api/organisations/${installer.id}/audit?limit=2`);
+    expect(first.status).toBe(200);
+    expect(first.body.entries.map((e: { summary: string }) => e.summary)).toEqual([
+      'note 2',
+      'note 1',
+    ]);
+    const second = await agent.get(
+      `/api/organisations/${installer.id}/audit?limit=2&before=${first.body.nextBefore}`,
+    );
+    expect(second.body.entries[0].summary).toBe('note 0');
+
+    const bad = await agent.get(`/api/organisations/${installer.id}/audit?limit=0`);
+    expect(bad.status).toBe(400);
+    expect(bad.body.errors).toEqual([{ path: 'query.limit', message: expect.any(String) }]);
+
+    const rival = await harness.signedInAs(rivalOffice.userId);
+    expect((await rival.agent.get(`/api/organisations/${installer.id}/audit`)).status).toBe(404);
+  });
+
+  it("let an operator list their centre's people but not an installer's", async () => {
+    const { agent } = await harness.signedInAs(people.operator.userId);
+    expect((await agent.get(`/api/organisations/${centre.id}/members`)).status).toBe(200);
+    expect((await agent.get(`/api/organisations/${installer.id}/members`)).status).toBe(404);
+  });
+});
+
 describe('database guards', () => {
   it('refuses an engineer membership in a monitoring centre', async () => {
     const person = await createPerson(db, { memberships: [] });

@@ -44,7 +44,7 @@ export function formAction(page: string, name: 'login' | 'totp'): string {
 export interface SignInOptions {
   email: string;
   password: string;
-  totpSecret?: string;
+  totpSecret?: string | null;
   /** Stop at the hop back to the app's callback instead of visiting it. */
   stopAtCallback?: boolean;
   /** Use the code of a later 30-second step (the IdP accepts one step of clock drift). */

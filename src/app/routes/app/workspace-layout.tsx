@@ -1,0 +1,53 @@
+import { Suspense } from 'react';
+import { House } from 'lucide-react';
+import { Outlet } from 'react-router-dom';
+
+import { PublicLayout } from '@/components/layouts/public-layout';
+import { WideLayout } from '@/components/layouts/wide-layout';
+import { LoadingStatus } from '@/components/ui/loading-status';
+import { paths } from '@/config/paths';
+import { useMe } from '@/features/auth/api/get-me';
+import { AccountBar } from '@/features/auth/components/account-bar';
+import { roleEntries } from '@/features/auth/utils/role-grants';
+import { roleHomeHref, roleLabels, useRoleInView } from '@/lib/roles';
+
+/** Frame for engineer, office and operator pages: header, left navigation, wide content. */
+export function WorkspaceLayoutRoute() {
+  const { data: me } = useMe();
+  const roleInView = useRoleInView();
+
+  // Only after sign-out has cleared the cache, while the browser is leaving for the provider.
+  if (!me) {
+    return (
+      <PublicLayout>
+        <p className="px-6 py-12">You have signed out.</p>
+      </PublicLayout>
+    );
+  }
+
+  // On a refusal page the role in view is one the person lacks: show none rather than imply it.
+  const current = roleEntries(me.roles).find((entry) => entry.role === roleInView);
+  const homeHref = current ? roleHomeHref(current.role) : paths.app.getHref();
+
+  return (
+    <WideLayout
+      homeHref={homeHref}
+      account={<AccountBar currentRole={current?.role} />}
+      context={
+        current ? (
+          <>
+            <p className="font-semibold">{roleLabels[current.role]}</p>
+            {current.organisationNames.length > 0 ? (
+              <p className="text-ink-muted">{current.organisationNames.join(', ')}</p>
+            ) : null}
+          </>
+        ) : null
+      }
+      navigation={[{ label: 'Home', href: homeHref, icon: House }]}
+    >
+      <Suspense fallback={<LoadingStatus label="Loading page" />}>
+        <Outlet />
+      </Suspense>
+    </WideLayout>
+  );
+}

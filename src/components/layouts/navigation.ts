@@ -1,0 +1,7 @@
+import type { LucideIcon } from 'lucide-react';
+
+export type NavigationItem = {
+  label: string;
+  href: string;
+  icon: LucideIcon;
+};

@@ -1,0 +1,42 @@
+import type { Role } from '@/types/api';
+
+function withQuery(path: string, query: Record<string, string | undefined>): string {
+  const search = new URLSearchParams();
+  for (const [name, value] of Object.entries(query)) {
+    if (value !== undefined && value !== '') search.set(name, value);
+  }
+  const queryString = search.toString();
+  return queryString ? `${path}?${queryString}` : path;
+}
+
+export const paths = {
+  landing: { path: '/', getHref: () => '/' },
+  // Entry point after sign-in: sends the person to the home of their first role.
+  app: { path: '/app', getHref: () => '/app' },
+  signinError: {
+    path: '/signin-error',
+    getHref: (reason?: string) => withQuery('/signin-error', { reason }),
+  },
+  home: {
+    engineer: { path: '/engineer', getHref: () => '/engineer' },
+    office: { path: '/office', getHref: () => '/office' },
+    operator: { path: '/operator', getHref: () => '/operator' },
+    homeowner: { path: '/homeowner', getHref: () => '/homeowner' },
+    keyholder: { path: '/keyholder', getHref: () => '/keyholder' },
+  },
+  // Served by the API, not the client router: always reached by a full-page navigation.
+  auth: {
+    login: {
+      path: '/auth/login',
+      getHref: (returnTo?: string) => withQuery('/auth/login', { returnTo }),
+    },
+    logout: { path: '/auth/logout', getHref: () => '/auth/logout' },
+  },
+  api: {
+    me: { path: '/api/me', getHref: () => '/api/me' },
+    roleHome: {
+      path: '/api/homes/:role',
+      getHref: (role: Role) => `/api/homes/${encodeURIComponent(role)}`,
+    },
+  },
+} as const;
