@@ -1,6 +1,15 @@
 import { execFile, spawn } from 'node:child_process';
-import { existsSync, mkdirSync, readdirSync, statSync, chmodSync, chownSync } from 'node:fs';
+import {
+  readFileSync,
+  existsSync,
+  mkdirSync,
+  readdirSync,
+  statSync,
+  chmodSync,
+  chownSync,
+} from 'node:fs';
 import { writeFile } from 'node:fs/promises';
+import { createServer as createNetServer, type AddressInfo } from 'node:net';
 import os from 'node:os';
 import path from 'node:path';
 import { promisify } from 'node:util';
@@ -12,6 +21,8 @@ export interface PostgresServerOptions {
   /** Folder holding the cluster; created and initialised on first use. */
   dataDir: string;
   port: number;
+  /** Tests may run beside another checkout's server: then any free port will do. */
+  anyFreePort?: boolean;
   log?: (message: string) => void;
 }
 
@@ -69,18 +80,33 @@ export async function startPostgres(options: PostgresServerOptions): Promise<Run
     if (osUser) chownSync(path.join(dataDir, 'postgresql.auto.conf'), osUser.uid, osUser.gid);
   }
 
-  if (await isAccepting(options.port)) {
-    if (await isRunningOn(bin, dataDir, osUser)) {
-      log(`PostgreSQL already running on 127.0.0.1:${options.port}; reusing it`);
-      return handle(options.port, false, async () => {});
+  const runningPort = (await isRunningOn(bin, dataDir, osUser))
+    ? portOfRunningServer(dataDir)
+    : undefined;
+  if (runningPort !== undefined) {
+    if (runningPort === options.port || options.anyFreePort) {
+      log(`PostgreSQL already running on 127.0.0.1:${runningPort}; reusing it`);
+      return handle(runningPort, false, async () => {});
     }
     throw new PostgresSetupError(
-      `Port ${options.port} on 127.0.0.1 is taken by another server. Stop it or set WARDBOOK_PG_PORT.`,
+      `This data folder's PostgreSQL is already running on port ${runningPort}. ` +
+        `Stop it, or set WARDBOOK_PG_PORT=${runningPort}.`,
     );
   }
 
+  let port = options.port;
+  if (await isAccepting(port)) {
+    if (!options.anyFreePort) {
+      throw new PostgresSetupError(
+        `Port ${port} on 127.0.0.1 is taken by another server. Stop it or set WARDBOOK_PG_PORT.`,
+      );
+    }
+    port = await freePort();
+    log(`port ${options.port} is taken by another server; using ${port}`);
+  }
+
   const logFile = path.join(dataDir, 'server.log');
-  log(`starting PostgreSQL on 127.0.0.1:${options.port}`);
+  log(`starting PostgreSQL on 127.0.0.1:${port}`);
   try {
     await asPostgres(osUser, path.join(bin, 'pg_ctl'), [
       '-D',
@@ -88,7 +114,7 @@ export async function startPostgres(options: PostgresServerOptions): Promise<Run
       '-l',
       logFile,
       '-o',
-      `-p ${options.port} -c listen_addresses=127.0.0.1`,
+      `-p ${port} -c listen_addresses=127.0.0.1`,
       '-w',
       '-t',
       '60',
@@ -99,7 +125,7 @@ export async function startPostgres(options: PostgresServerOptions): Promise<Run
       `PostgreSQL did not start; see ${logFile}.\n${(error as Error).message}`,
     );
   }
-  return handle(options.port, true, async () => {
+  return handle(port, true, async () => {
     log('stopping PostgreSQL');
     await asPostgres(osUser, path.join(bin, 'pg_ctl'), ['-D', dataDir, '-m', 'fast', '-w', 'stop']);
   });
@@ -223,6 +249,27 @@ async function isRunningOn(bin: string, dataDir: string, osUser: OsUser | undefi
   } catch {
     return false;
   }
+}
+
+/** postmaster.pid's fourth line is the port the running server listens on. */
+function portOfRunningServer(dataDir: string): number | undefined {
+  try {
+    const port = Number(readFileSync(path.join(dataDir, 'postmaster.pid'), 'utf8').split('\n')[3]);
+    return Number.isInteger(port) && port > 0 ? port : undefined;
+  } catch {
+    return undefined;
+  }
+}
+
+function freePort(): Promise<number> {
+  return new Promise((resolve, reject) => {
+    const probe = createNetServer();
+    probe.once('error', reject);
+    probe.listen(0, '127.0.0.1', () => {
+      const { port } = probe.address() as AddressInfo;
+      probe.close(() => resolve(port));
+    });
+  });
 }
 
 async function isAccepting(port: number): Promise<boolean> {

@@ -28,6 +28,7 @@ export async function createTestDatabase(): Promise<{
   const postgres = await startPostgres({
     dataDir,
     port: config.postgres.port,
+    anyFreePort: true,
   });
   const startedByTests = path.join(config.dataDir, 'postgres-started-by-tests');
   if (postgres.startedHere) writeFileSync(startedByTests, `${process.pid}\n`);
