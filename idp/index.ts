@@ -44,7 +44,11 @@ const purge = setInterval(
 );
 purge.unref();
 
+let stopping = false;
 async function shutdown(signal: string) {
+  // A terminal's Ctrl-C reaches this process and `npm start`'s supervisor alike.
+  if (stopping) return;
+  stopping = true;
   logger.info({ signal }, 'identity provider stopping');
   clearInterval(purge);
   server.close();

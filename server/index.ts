@@ -35,7 +35,11 @@ server.listen(config.api.port, '127.0.0.1', () => {
   logger.info(`API listening on http://127.0.0.1:${config.api.port}`);
 });
 
+let stopping = false;
 async function shutdown(signal: string) {
+  // A terminal's Ctrl-C reaches this process and `npm start`'s supervisor alike.
+  if (stopping) return;
+  stopping = true;
   logger.info({ signal }, 'API stopping');
   server.close();
   server.closeIdleConnections();
