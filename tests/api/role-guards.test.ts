@@ -121,6 +121,18 @@ describe('organisation scope', () => {
     expect((await agent.get('/api/homes/engineer')).status).toBe(403);
   });
 
+  it('treats an expired session as signed out', async () => {
+    const person = await createPerson(db, { memberships: [{ role: 'homeowner' }] });
+    const { agent } = await harness.signedInAs(person.userId);
+    expect((await agent.get('/api/me')).status).toBe(200);
+    await db('sessions')
+      .whereRaw(`sess->>'userId' = ?`, [person.userId])
+      .update({ expire: db.raw(`now() - interval '1 minute'`) });
+    const response = await agent.get('/api/me');
+    expect(response.status).toBe(401);
+    expect(response.body.type).toBe('/problems/not-signed-in');
+  });
+
   it('signs out a disabled user on their next request', async () => {
     const leaver = await createPerson(db, {
       memberships: [{ role: 'engineer', organisationId: installer.id }],
