@@ -1,13 +1,14 @@
 import express, { type Express } from 'express';
-import helmet from 'helmet';
 import type { Knex } from 'knex';
 import Provider from 'oidc-provider';
 import type { Logger } from 'pino';
 import { fileURLToPath } from 'node:url';
 import { requestLogger } from '../server/http/logger';
+import { securityHeaders } from '../server/http/security-headers';
 import type { Mailer } from '../server/mail/mailer';
 import { fontsDir, publicDir } from '../server/paths';
 import { buildConfiguration } from './configuration';
+import { sendPage } from './forms';
 import { createInteractionRouter } from './interactions';
 import type { Jwks } from './keys';
 import { createPasswordRouter } from './passwords';
@@ -50,27 +51,12 @@ export function createIdpApp(deps: IdpDeps): { app: Express; provider: Provider 
   app.set('trust proxy', 'loopback');
   app.use(requestLogger(deps.logger));
   app.use(
-    helmet({
-      contentSecurityPolicy: {
-        useDefaults: false,
-        directives: {
-          defaultSrc: ["'self'"],
-          scriptSrc: ["'self'"],
-          styleSrc: ["'self'"],
-          imgSrc: ["'self'", 'data:'],
-          fontSrc: ["'self'"],
-          connectSrc: ["'self'"],
-          objectSrc: ["'none'"],
-          baseUri: ["'self'"],
-          // Browsers apply form-action to the redirects after a form post, and sign-in and
-          // sign-out forms end with a redirect back to the app.
-          formAction: ["'self'", ...deps.appOrigins],
-          frameAncestors: ["'none'"],
-          ...(secure ? { upgradeInsecureRequests: [] } : {}),
-        },
-      },
-      strictTransportSecurity: secure,
-      referrerPolicy: { policy: 'no-referrer' },
+    securityHeaders({
+      secure,
+      // Sign-in and sign-out forms end with a redirect back to the app.
+      formTargets: deps.appOrigins,
+      imgSources: ['data:'],
+      referrerPolicy: 'no-referrer',
     }),
   );
 
@@ -100,18 +86,17 @@ export function createIdpApp(deps: IdpDeps): { app: Express; provider: Provider 
   app.use(((error, _req, res, _next) => {
     const expired = (error as { name?: string }).name === 'SessionNotFound';
     if (!expired) deps.logger.error({ err: error }, 'idp request failed');
-    res
-      .status(expired ? 400 : 500)
-      .type('html')
-      .send(
-        errorPage({
-          title: expired ? 'This sign-in has expired' : 'Something went wrong',
-          message: expired
-            ? 'The sign-in page was open too long or was already used. Start again from Wardbook.'
-            : 'The sign-in service could not finish this request. Try again from Wardbook.',
-          appUrl: deps.appOrigins[0]!,
-        }),
-      );
+    sendPage(
+      res,
+      expired ? 400 : 500,
+      errorPage({
+        title: expired ? 'This sign-in has expired' : 'Something went wrong',
+        message: expired
+          ? 'The sign-in page was open too long or was already used. Start again from Wardbook.'
+          : 'The sign-in service could not finish this request. Try again from Wardbook.',
+        appUrl: deps.appOrigins[0]!,
+      }),
+    );
   }) as express.ErrorRequestHandler);
 
   return { app, provider };

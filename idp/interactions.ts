@@ -1,5 +1,4 @@
-import { Router, urlencoded, type Request, type Response } from 'express';
-import { rateLimit } from 'express-rate-limit';
+import { Router, type Request, type Response } from 'express';
 import { SignJWT, jwtVerify } from 'jose';
 import type { Knex } from 'knex';
 import type Provider from 'oidc-provider';
@@ -16,6 +15,7 @@ import {
   secondsLocked,
   type AccountRecord,
 } from './account';
+import { attemptLimiter, formBody, sendPage } from './forms';
 import { matchTotpStep, newTotpSecret, totpUri } from './totp';
 import { enrolmentPage, loginPage, secondFactorPage } from './views/pages';
 
@@ -54,24 +54,10 @@ export function createInteractionRouter(deps: InteractionDeps): Router {
   const { db, provider } = deps;
   const router = Router();
   const key = new TextEncoder().encode(deps.pendingLoginKey);
-  const form = urlencoded({ extended: false, limit: '10kb' });
-  const attemptLimit = rateLimit({
-    windowMs: 15 * 60 * 1000,
-    limit: deps.loginAttemptsPerWindow,
-    standardHeaders: 'draft-8',
-    legacyHeaders: false,
-    handler: (_req, res) => {
-      res
-        .status(429)
-        .type('html')
-        .send(
-          loginPage({
-            uid: String(_req.params.uid),
-            error: 'Too many sign-in attempts from this network. Wait 15 minutes and try again.',
-          }),
-        );
-    },
-  });
+  const form = formBody;
+  const attemptLimit = attemptLimiter(deps.loginAttemptsPerWindow, (req, error) =>
+    loginPage({ uid: String(req.params.uid), error }),
+  );
 
   async function audit(req: Request, action: string, summary: string, account?: AccountRecord) {
     await recordAuditEntry(db, {
@@ -136,7 +122,7 @@ export function createInteractionRouter(deps: InteractionDeps): Router {
     error?: string,
   ) {
     if (account.totp_secret) {
-      res.type('html').send(secondFactorPage({ uid, error }));
+      sendPage(res, res.statusCode, secondFactorPage({ uid, error }));
       return;
     }
     // First sign-in of a staff account: enrol an authenticator before going further.
@@ -149,7 +135,7 @@ export function createInteractionRouter(deps: InteractionDeps): Router {
       margin: 1,
       width: 200,
     });
-    res.type('html').send(enrolmentPage({ uid, secret, qrDataUrl, error }));
+    sendPage(res, res.statusCode, enrolmentPage({ uid, secret, qrDataUrl, error }));
   }
 
   // --- Show the step this interaction is at ----------------------------------------------------
@@ -159,7 +145,7 @@ export function createInteractionRouter(deps: InteractionDeps): Router {
     if (details.prompt.name === 'login') {
       const account = await pendingAccount(req, uid);
       if (account) return renderSecondFactor(res, uid, account);
-      res.set('Cache-Control', 'no-store').type('html').send(loginPage({ uid }));
+      sendPage(res, 200, loginPage({ uid }));
       return;
     }
     // Wardbook's own web app is the only client and needs no consent screen; a grant is
@@ -176,16 +162,15 @@ export function createInteractionRouter(deps: InteractionDeps): Router {
       const details = await provider.interactionDetails(req, res);
       const { email, password } = loginForm.parse(req.body ?? {});
       if (!email || !password) {
-        res
-          .status(400)
-          .type('html')
-          .send(
-            loginPage({
-              uid: details.uid,
-              email,
-              error: 'Enter your e-mail address and password.',
-            }),
-          );
+        sendPage(
+          res,
+          400,
+          loginPage({
+            uid: details.uid,
+            email,
+            error: 'Enter your e-mail address and password.',
+          }),
+        );
         return;
       }
       const check = await checkPassword(db, email, password);
@@ -202,10 +187,11 @@ export function createInteractionRouter(deps: InteractionDeps): Router {
             : `Failed sign-in for unknown address ${email.slice(0, 120)}`,
           check.account,
         );
-        res
-          .status(check.reason === 'locked' ? 429 : 401)
-          .type('html')
-          .send(loginPage({ uid: details.uid, email, error: reason }));
+        sendPage(
+          res,
+          check.reason === 'locked' ? 429 : 401,
+          loginPage({ uid: details.uid, email, error: reason }),
+        );
         return;
       }
       if (await needsSecondFactor(db, check.account)) {
@@ -222,15 +208,14 @@ export function createInteractionRouter(deps: InteractionDeps): Router {
     const details = await provider.interactionDetails(req, res);
     const account = await pendingAccount(req, details.uid);
     if (!account) {
-      res
-        .status(400)
-        .type('html')
-        .send(
-          loginPage({
-            uid: details.uid,
-            error: 'Your sign-in took too long. Enter your password again.',
-          }),
-        );
+      sendPage(
+        res,
+        400,
+        loginPage({
+          uid: details.uid,
+          error: 'Your sign-in took too long. Enter your password again.',
+        }),
+      );
       return;
     }
     const wait = secondsLocked(account);

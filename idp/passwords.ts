@@ -1,10 +1,10 @@
 import { createHash, randomBytes } from 'node:crypto';
-import { Router, urlencoded } from 'express';
-import { rateLimit } from 'express-rate-limit';
+import { Router } from 'express';
 import type { Knex } from 'knex';
 import { z } from 'zod';
 import { recordAuditEntry } from '../server/audit/repository';
 import type { Mailer } from '../server/mail/mailer';
+import { attemptLimiter, formBody, sendPage } from './forms';
 import { clearFailedAttempts, findAccountByEmail, hashPassword } from './account';
 import { forgotPasswordPage, messagePage, resetPasswordPage } from './views/pages';
 
@@ -77,23 +77,10 @@ export function passwordProblem(
 export function createPasswordRouter(deps: PasswordRouterDeps): Router {
   const { db } = deps;
   const router = Router();
-  const form = urlencoded({ extended: false, limit: '10kb' });
-  const limit = rateLimit({
-    windowMs: 15 * 60 * 1000,
-    limit: deps.requestsPerWindow,
-    standardHeaders: 'draft-8',
-    legacyHeaders: false,
-    handler: (_req, res) => {
-      res
-        .status(429)
-        .type('html')
-        .send(
-          forgotPasswordPage({
-            error: 'Too many requests from this network. Wait 15 minutes and try again.',
-          }),
-        );
-    },
-  });
+  const form = formBody;
+  const limit = attemptLimiter(deps.requestsPerWindow, (_req, error) =>
+    forgotPasswordPage({ error }),
+  );
   const expired = messagePage({
     title: 'This link no longer works',
     message:
@@ -102,16 +89,13 @@ export function createPasswordRouter(deps: PasswordRouterDeps): Router {
   });
 
   router.get('/password/forgot', (_req, res) => {
-    res.type('html').send(forgotPasswordPage());
+    sendPage(res, 200, forgotPasswordPage());
   });
 
   router.post('/password/forgot', limit, form, async function requestReset(req, res) {
     const { email } = forgotForm.parse(req.body ?? {});
     if (!z.email().safeParse(email).success) {
-      res
-        .status(400)
-        .type('html')
-        .send(forgotPasswordPage({ email, error: 'Enter a valid e-mail address.' }));
+      sendPage(res, 400, forgotPasswordPage({ email, error: 'Enter a valid e-mail address.' }));
       return;
     }
     const account = await findAccountByEmail(db, email);
@@ -141,7 +125,9 @@ export function createPasswordRouter(deps: PasswordRouterDeps): Router {
       });
     }
     // The same answer whether or not the address is known, so accounts cannot be discovered.
-    res.type('html').send(
+    sendPage(
+      res,
+      200,
       messagePage({
         title: 'Check your e-mail',
         message: `If ${email} has a Wardbook account, a link to reset its password is on its way. It works for ${RESET_MINUTES} minutes.`,
@@ -153,20 +139,17 @@ export function createPasswordRouter(deps: PasswordRouterDeps): Router {
     const token = String(req.params.token);
     const row = await usableToken(db, token);
     if (!row) {
-      res.status(410).type('html').send(expired);
+      sendPage(res, 410, expired);
       return;
     }
-    res
-      .set('Cache-Control', 'no-store')
-      .type('html')
-      .send(resetPasswordPage({ token, purpose: row.purpose }));
+    sendPage(res, 200, resetPasswordPage({ token, purpose: row.purpose }));
   });
 
   router.post('/password/reset/:token', limit, form, async function saveReset(req, res) {
     const token = String(req.params.token);
     const row = await usableToken(db, token);
     if (!row) {
-      res.status(410).type('html').send(expired);
+      sendPage(res, 410, expired);
       return;
     }
     const { password, confirm } = resetForm.parse(req.body ?? {});
@@ -175,10 +158,7 @@ export function createPasswordRouter(deps: PasswordRouterDeps): Router {
       .first<{ email: string }>('email');
     const problem = passwordProblem(password, confirm, account?.email ?? '');
     if (problem) {
-      res
-        .status(400)
-        .type('html')
-        .send(resetPasswordPage({ token, purpose: row.purpose, error: problem }));
+      sendPage(res, 400, resetPasswordPage({ token, purpose: row.purpose, error: problem }));
       return;
     }
     const passwordHash = await hashPassword(password);
@@ -208,7 +188,9 @@ export function createPasswordRouter(deps: PasswordRouterDeps): Router {
       });
     });
     await clearFailedAttempts(db, row.account_id);
-    res.type('html').send(
+    sendPage(
+      res,
+      200,
       messagePage({
         title: 'Password saved',
         message: 'Your new password is ready. Sign in to Wardbook with it.',

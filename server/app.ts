@@ -2,7 +2,6 @@ import { existsSync } from 'node:fs';
 import path from 'node:path';
 import express, { type Express } from 'express';
 import type { Store } from 'express-session';
-import helmet from 'helmet';
 import type { Knex } from 'knex';
 import type { Logger } from 'pino';
 import { csrfSync } from 'csrf-sync';
@@ -14,6 +13,7 @@ import { createHealthRouter } from './health/routes';
 import { createHomesRouter } from './homes/routes';
 import { requestLogger } from './http/logger';
 import { apiNotFound, problemHandler } from './http/problem-handler';
+import { securityHeaders } from './http/security-headers';
 import { createMeRouter } from './me/routes';
 import { createOrganisationsRouter } from './organisations/routes';
 
@@ -37,29 +37,7 @@ export function createApp(deps: AppDeps): Express {
   app.set('trust proxy', 'loopback');
 
   app.use(requestLogger(deps.logger));
-  app.use(
-    helmet({
-      contentSecurityPolicy: {
-        useDefaults: false,
-        directives: {
-          defaultSrc: ["'self'"],
-          scriptSrc: ["'self'"],
-          styleSrc: ["'self'"],
-          imgSrc: ["'self'", 'data:', 'blob:'],
-          fontSrc: ["'self'"],
-          connectSrc: ["'self'"],
-          objectSrc: ["'none'"],
-          baseUri: ["'self'"],
-          formAction: ["'self'"],
-          frameAncestors: ["'none'"],
-          ...(secure ? { upgradeInsecureRequests: [] } : {}),
-        },
-      },
-      // HSTS on plain-HTTP loopback would only confuse browsers during development.
-      strictTransportSecurity: secure,
-      referrerPolicy: { policy: 'same-origin' },
-    }),
-  );
+  app.use(securityHeaders({ secure, imgSources: ['data:', 'blob:'] }));
 
   // --- Health and static files: no session needed --------------------------------------------
   app.use(createHealthRouter(deps));

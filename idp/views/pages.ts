@@ -31,6 +31,23 @@ export function loginPage(options: { uid: string; email?: string; error?: string
   });
 }
 
+/** The 6-digit code field and its buttons, shared by sign-in and enrolment. */
+function codeForm(options: { uid: string; label: string; hint?: string; submit: string }) {
+  return html`<form method="post" action="/interaction/${options.uid}/totp" novalidate>
+      ${field({
+        name: 'code',
+        label: options.label,
+        hint: options.hint,
+        inputmode: 'numeric',
+        autocomplete: 'one-time-code',
+        pattern: '[0-9]{6}',
+        autofocus: true,
+      })}
+      <button class="primary" type="submit">${options.submit}</button>
+    </form>
+    <p class="links"><a href="/interaction/${options.uid}/abort">Cancel sign-in</a></p>`;
+}
+
 export function secondFactorPage(options: { uid: string; error?: string }) {
   return page({
     title: 'One-time code',
@@ -39,18 +56,7 @@ export function secondFactorPage(options: { uid: string; error?: string }) {
         Open the authenticator app on your phone and type the 6-digit code it shows for Wardbook.
       </p>
       ${errorSummary(options.error)}
-      <form method="post" action="/interaction/${options.uid}/totp" novalidate>
-        ${field({
-          name: 'code',
-          label: 'One-time code',
-          inputmode: 'numeric',
-          autocomplete: 'one-time-code',
-          pattern: '[0-9]{6}',
-          autofocus: true,
-        })}
-        <button class="primary" type="submit">Continue</button>
-      </form>
-      <p class="links"><a href="/interaction/${options.uid}/abort">Cancel sign-in</a></p>`,
+      ${codeForm({ uid: options.uid, label: 'One-time code', submit: 'Continue' })}`,
   });
 }
 
@@ -80,19 +86,12 @@ export function enrolmentPage(options: {
         </figcaption>
       </figure>
       ${errorSummary(options.error)}
-      <form method="post" action="/interaction/${options.uid}/totp" novalidate>
-        ${field({
-          name: 'code',
-          label: 'Code shown by the app',
-          hint: 'Six digits. A new code appears every 30 seconds.',
-          inputmode: 'numeric',
-          autocomplete: 'one-time-code',
-          pattern: '[0-9]{6}',
-          autofocus: true,
-        })}
-        <button class="primary" type="submit">Confirm and sign in</button>
-      </form>
-      <p class="links"><a href="/interaction/${options.uid}/abort">Cancel sign-in</a></p>`,
+      ${codeForm({
+        uid: options.uid,
+        label: 'Code shown by the app',
+        hint: 'Six digits. A new code appears every 30 seconds.',
+        submit: 'Confirm and sign in',
+      })}`,
   });
 }
 

@@ -3,8 +3,8 @@ import path from 'node:path';
 import { loadConfig } from '../config/config';
 import { createDb } from '../db/knex';
 import { migrateToLatest, migrationSource, MIGRATIONS_TABLE, runSeeds } from '../db/migrate';
-import { ensureDatabase, startPostgres } from '../db/postgres-server';
 import { migrationsDir } from '../paths';
+import { openLocalDatabase } from './prepare-database';
 
 /**
  * npm run db:migrate | db:rollback | db:seed | db:make -- <what_it_does>
@@ -36,12 +36,7 @@ async function main() {
   }
 
   const config = loadConfig();
-  const postgres = await startPostgres({
-    dataDir: path.join(config.dataDir, 'postgres'),
-    port: config.postgres.port,
-    log: console.log,
-  });
-  await ensureDatabase(postgres, config.postgres.database);
+  const postgres = await openLocalDatabase(config, console.log);
   const db = createDb(config.postgres, 2);
   try {
     if (command === 'migrate') {

@@ -4,17 +4,26 @@ import { createDb } from '../db/knex';
 import { migrateToLatest, runSeeds } from '../db/migrate';
 import { ensureDatabase, startPostgres, type RunningPostgres } from '../db/postgres-server';
 
-/** Starts PostgreSQL, creates the database, migrates and (optionally) seeds the demo. */
-export async function prepareDatabase(
+/** Starts (or reuses) the project's PostgreSQL and makes sure the configured database exists. */
+export async function openLocalDatabase(
   config: Config,
-  options: { seed: boolean; log: (message: string) => void },
+  log: (message: string) => void,
 ): Promise<RunningPostgres> {
   const postgres = await startPostgres({
     dataDir: path.join(config.dataDir, 'postgres'),
     port: config.postgres.port,
-    log: options.log,
+    log,
   });
   await ensureDatabase(postgres, config.postgres.database);
+  return postgres;
+}
+
+/** As openLocalDatabase, then migrates and (optionally) seeds the demo. */
+export async function prepareDatabase(
+  config: Config,
+  options: { seed: boolean; log: (message: string) => void },
+): Promise<RunningPostgres> {
+  const postgres = await openLocalDatabase(config, options.log);
   const db = createDb(config.postgres, 2);
   try {
     const applied = await migrateToLatest(db);

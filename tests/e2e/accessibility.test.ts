@@ -1,25 +1,18 @@
 import AxeBuilder from '@axe-core/playwright';
-import type { Browser, Page } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
+import type { Page } from 'playwright-core';
+import { describe, expect, inject, it } from 'vitest';
 import { DEMO_ACCOUNTS, DEMO_PASSWORD } from '../../seeds/data/demo-scenario';
-import { launchChromium } from '../setup/chromium';
+import { useChromium } from '../setup/use-chromium';
 import '../setup/provided';
 
 // axe-core's rules for WCAG 2.0, 2.1 and 2.2 at levels A and AA (Deque's axe-core rule tags).
 const WCAG_AA = ['wcag2a', 'wcag2aa', 'wcag21a', 'wcag21aa', 'wcag22aa'];
 const { apiUrl, idpUrl } = inject('stack');
-let browser: Browser;
-
-beforeAll(async () => {
-  browser = await launchChromium();
-});
-afterAll(async () => {
-  await browser?.close();
-});
+const browser = useChromium();
 
 /** axe needs a page of its own context. */
 async function newPage(viewport: { width: number; height: number }) {
-  const context = await browser.newContext({ viewport });
+  const context = await browser().newContext({ viewport });
   return context.newPage();
 }
 

@@ -1,20 +1,13 @@
-import type { Browser, Page } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
+import type { Page } from 'playwright-core';
+import { describe, expect, inject, it } from 'vitest';
 import { totpCode } from '../../idp/totp';
 import { ROLES, type Role } from '../../server/users/roles';
 import { DEMO_ACCOUNTS, DEMO_PASSWORD } from '../../seeds/data/demo-scenario';
-import { launchChromium } from '../setup/chromium';
+import { useChromium } from '../setup/use-chromium';
 import '../setup/provided';
 
 const { apiUrl, idpUrl } = inject('stack');
-let browser: Browser;
-
-beforeAll(async () => {
-  browser = await launchChromium();
-});
-afterAll(async () => {
-  await browser?.close();
-});
+const browser = useChromium();
 
 const HOME_HEADINGS: Record<Role, string> = {
   engineer: 'Engineer home',
@@ -57,7 +50,7 @@ describe('signing in through the real login page', () => {
   it.each(ROLES)(
     'takes the demo %s to their home, and the API refuses them the other roles',
     async (role) => {
-      const context = await browser.newContext({ viewport: VIEWPORTS[role] });
+      const context = await browser().newContext({ viewport: VIEWPORTS[role] });
       const page = await context.newPage();
       const consoleErrors: string[] = [];
       page.on('console', (message) => {
@@ -94,7 +87,7 @@ describe('signing in through the real login page', () => {
 
 describe('signing out', () => {
   it('ends both sessions and returns to the landing page', async () => {
-    const context = await browser.newContext({ viewport: VIEWPORTS.keyholder });
+    const context = await browser().newContext({ viewport: VIEWPORTS.keyholder });
     const page = await context.newPage();
     await signInThroughLoginPage(page, 'keyholder');
     await page.getByRole('button', { name: 'Sign out' }).click();
@@ -112,7 +105,7 @@ describe('signing out', () => {
   });
 
   it('shows a readable page when the sign-in callback is tampered with', async () => {
-    const context = await browser.newContext();
+    const context = await browser().newContext();
     const page = await context.newPage();
     await page.goto(`${apiUrl}/auth/callback?code=forged&state=forged`);
     await page.waitForURL(`${apiUrl}/signin-error**`);
