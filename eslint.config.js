@@ -25,7 +25,23 @@ export default tseslint.config(
     plugins: { 'react-hooks': reactHooks, 'react-refresh': reactRefresh },
     rules: {
       ...reactHooks.configs.recommended.rules,
-      'react-refresh/only-export-components': ['warn', { allowConstantExport: true }],
+      // Screen modules export their Component together with a createLoader factory.
+      'react-refresh/only-export-components': [
+        'warn',
+        { allowConstantExport: true, allowExportNames: ['createLoader'] },
+      ],
+      // The browser may share the API's zod schemas, and nothing else from the server.
+      'no-restricted-imports': [
+        'error',
+        {
+          patterns: [
+            {
+              regex: '^@server/(?!schema/|[a-z-]+/schema$)',
+              message: 'Import only server/**/schema.ts or server/schema/* into the client.',
+            },
+          ],
+        },
+      ],
     },
   },
   {

@@ -10,7 +10,11 @@ const apiOrigin = process.env.WARDBOOK_API_ORIGIN ?? 'http://127.0.0.1:3000';
 export default defineConfig({
   plugins: [react(), tailwindcss()],
   resolve: {
-    alias: { '@': fileURLToPath(new URL('./src', import.meta.url)) },
+    alias: {
+      '@': fileURLToPath(new URL('./src', import.meta.url)),
+      // Request and response schemas are shared with the API (server/**/schema.ts only).
+      '@server': fileURLToPath(new URL('./server', import.meta.url)),
+    },
   },
   server: {
     host: '127.0.0.1',

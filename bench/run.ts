@@ -15,7 +15,9 @@ import { loadConfig } from '../server/config/config';
 import { createDb } from '../server/db/knex';
 import { migrateToLatest } from '../server/db/migrate';
 import { dropDatabase, ensureDatabase, startPostgres } from '../server/db/postgres-server';
+import { createLocalDiskStorage } from '../server/files/storage';
 import { createLogger } from '../server/http/logger';
+import { createSmtpMailer } from '../server/mail/mailer';
 import { repoRoot } from '../server/paths';
 
 /**
@@ -100,6 +102,9 @@ async function healthThroughput() {
       sessionStore: createSessionStore(pool),
       sessionSecret: 'bench-only-secret-bench-only-secret',
       appOrigins: ['http://127.0.0.1:3000'],
+      mailer: createSmtpMailer({ host: '127.0.0.1', port: 9, from: 'bench@example.com' }),
+      storage: createLocalDiskStorage(path.join(config.dataDir, 'bench-files')),
+      idpIssuer: 'http://127.0.0.1:9',
     }),
   );
   const bare = express();

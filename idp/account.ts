@@ -135,3 +135,20 @@ export function accountFinder(db: Knex): FindAccount {
     };
   };
 }
+
+/**
+ * The account for someone invited by e-mail: no password until they follow their link. An
+ * address that already has an account keeps it (and its password).
+ */
+export async function findOrCreateInvitedAccount(
+  db: Knex,
+  email: string,
+  displayName: string,
+): Promise<{ account: AccountRecord; created: boolean }> {
+  const existing = await findAccountByEmail(db, email);
+  if (existing) return { account: existing, created: false };
+  const [account] = await db<AccountRecord>(ACCOUNTS)
+    .insert({ email, display_name: displayName })
+    .returning('*');
+  return { account: account!, created: true };
+}

@@ -1,4 +1,3 @@
-import { createHash, randomBytes } from 'node:crypto';
 import { Router } from 'express';
 import type { Knex } from 'knex';
 import { z } from 'zod';
@@ -6,6 +5,7 @@ import { recordAuditEntry } from '../server/audit/repository';
 import type { Mailer } from '../server/mail/mailer';
 import { attemptLimiter, formBody, sendPage } from './forms';
 import { clearFailedAttempts, findAccountByEmail, hashPassword } from './account';
+import { issuePasswordToken, usableToken } from './password-tokens';
 import { forgotPasswordPage, messagePage, resetPasswordPage } from './views/pages';
 
 export interface PasswordRouterDeps {
@@ -17,47 +17,12 @@ export interface PasswordRouterDeps {
 }
 
 const RESET_MINUTES = 30;
-const TOKEN = /^[A-Za-z0-9_-]{43}$/;
 
 const forgotForm = z.object({ email: z.string().trim().max(320).default('') });
 const resetForm = z.object({
   password: z.string().max(1024).default(''),
   confirm: z.string().max(1024).default(''),
 });
-
-const sha256 = (value: string) => createHash('sha256').update(value).digest('hex');
-
-/** Creates a single-use link token; only its hash is stored. Invitations use the same table. */
-export async function issuePasswordToken(
-  db: Knex,
-  accountId: string,
-  purpose: 'reset' | 'invitation',
-  validMinutes: number,
-): Promise<string> {
-  const token = randomBytes(32).toString('base64url');
-  await db('idp.password_tokens').insert({
-    account_id: accountId,
-    purpose,
-    token_hash: sha256(token),
-    expires_at: new Date(Date.now() + validMinutes * 60 * 1000),
-  });
-  return token;
-}
-
-interface TokenRow {
-  id: string;
-  account_id: string;
-  purpose: 'reset' | 'invitation';
-}
-
-async function usableToken(db: Knex, token: string): Promise<TokenRow | undefined> {
-  if (!TOKEN.test(token)) return undefined;
-  return db('idp.password_tokens')
-    .where({ token_hash: sha256(token) })
-    .whereNull('used_at')
-    .where('expires_at', '>', db.fn.now())
-    .first<TokenRow | undefined>('id', 'account_id', 'purpose');
-}
 
 export function passwordProblem(
   password: string,

@@ -14,7 +14,19 @@ import { createHomesRouter } from './homes/routes';
 import { requestLogger } from './http/logger';
 import { apiNotFound, problemHandler } from './http/problem-handler';
 import { securityHeaders } from './http/security-headers';
+import { createChangeRequestsRouter } from './change-requests/routes';
+import { createDevicesRouter } from './devices/routes';
+import { createFilesRouter } from './files/routes';
+import type { FileStorage } from './files/storage';
+import { refuseUserCodes } from './http/refuse-user-codes';
+import { createKeyholdersRouter } from './keyholders/routes';
+import type { Mailer } from './mail/mailer';
 import { createMeRouter } from './me/routes';
+import { createMyRouter } from './my/routes';
+import { createSitesRouter } from './sites/routes';
+import { createSystemsRouter } from './systems/routes';
+import { createUserSlotsRouter } from './user-slots/routes';
+import { createZonesRouter } from './zones/routes';
 import { createOrganisationsRouter } from './organisations/routes';
 
 export interface AppDeps {
@@ -27,6 +39,10 @@ export interface AppDeps {
   appOrigins: string[];
   /** Folder of the built client (vite build). Omitted in API-only tests. */
   clientDir?: string;
+  mailer: Mailer;
+  storage: FileStorage;
+  /** The identity provider's address, for links in invitation e-mails. */
+  idpIssuer: string;
 }
 
 /** Builds the Wardbook API and web app. It never listens; server/index.ts does. */
@@ -72,6 +88,19 @@ export function createApp(deps: AppDeps): Express {
   );
   app.use(createHomesRouter(deps));
   app.use(createOrganisationsRouter(deps));
+
+  // The as-fitted record. No request body under /api/sites may carry an alarm user code.
+  const records = { ...deps, appUrl: deps.appOrigins[0]! };
+  app.use('/api/sites', refuseUserCodes);
+  app.use(createSitesRouter(records));
+  app.use(createSystemsRouter(records));
+  app.use(createZonesRouter(records));
+  app.use(createDevicesRouter(records));
+  app.use(createKeyholdersRouter(records));
+  app.use(createUserSlotsRouter(records));
+  app.use(createFilesRouter(records));
+  app.use(createChangeRequestsRouter(records));
+  app.use(createMyRouter(records));
   app.use('/api', apiNotFound);
 
   // --- The single-page app answers every other GET ---------------------------------------------

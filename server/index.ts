@@ -1,4 +1,5 @@
 import { createServer } from 'node:http';
+import path from 'node:path';
 import pg from 'pg';
 import { createApp } from './app';
 import { createOidcClient } from './auth/oidc-client';
@@ -7,6 +8,8 @@ import { loadConfig } from './config/config';
 import { loadOrCreateSecrets } from './config/secrets';
 import { createDb } from './db/knex';
 import { createLogger } from './http/logger';
+import { createLocalDiskStorage } from './files/storage';
+import { createSmtpMailer } from './mail/mailer';
 import { OIDC_CLIENT_ID } from '../idp/clients';
 
 // The API process: configuration, dependencies, listen, and a clean stop on SIGINT/SIGTERM.
@@ -15,6 +18,11 @@ const logger = createLogger(config.logLevel, 'api');
 const secrets = loadOrCreateSecrets(config.dataDir);
 const db = createDb(config.postgres);
 const sessionPool = new pg.Pool({ ...config.postgres, max: 5 });
+const mailer = createSmtpMailer({
+  host: config.mail.smtpHost,
+  port: config.mail.smtpPort,
+  from: config.mail.from,
+});
 
 const app = createApp({
   db,
@@ -28,6 +36,9 @@ const app = createApp({
   sessionSecret: secrets.sessionSecret,
   appOrigins: config.idp.appOrigins,
   clientDir: config.api.clientDir,
+  mailer,
+  storage: createLocalDiskStorage(path.join(config.dataDir, 'files')),
+  idpIssuer: config.idp.issuer,
 });
 
 const server = createServer(app);
@@ -43,6 +54,7 @@ async function shutdown(signal: string) {
   logger.info({ signal }, 'API stopping');
   server.close();
   server.closeIdleConnections();
+  mailer.close();
   await Promise.allSettled([db.destroy(), sessionPool.end()]);
   process.exit(0);
 }

@@ -3,7 +3,7 @@ import { afterAll, describe, expect, it } from 'vitest';
 import { buildApiHarness } from '../setup/api-app';
 import { closeTestDb, testDb } from '../setup/database';
 
-const harness = buildApiHarness(testDb());
+const harness = await buildApiHarness(testDb());
 afterAll(async () => {
   await harness.close();
   await closeTestDb();

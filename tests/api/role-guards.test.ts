@@ -5,7 +5,7 @@ import { closeTestDb, testDb } from '../setup/database';
 import { createOrganisation, createPerson, type TestPerson } from '../setup/factories';
 
 const db = testDb();
-const harness = buildApiHarness(db);
+const harness = await buildApiHarness(db);
 const people = {} as Record<Role, TestPerson>;
 let installer: { id: string; name: string };
 let rivalInstaller: { id: string; name: string };

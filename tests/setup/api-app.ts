@@ -1,4 +1,8 @@
 import { randomBytes } from 'node:crypto';
+import { mkdtemp, rm } from 'node:fs/promises';
+import type { AddressInfo } from 'node:net';
+import os from 'node:os';
+import path from 'node:path';
 import type { Express } from 'express';
 import type { Store } from 'express-session';
 import type { Knex } from 'knex';
@@ -10,11 +14,17 @@ import { createApp } from '../../server/app';
 import { createOidcClient } from '../../server/auth/oidc-client';
 import { createSessionStore, SESSION_COOKIE } from '../../server/auth/session';
 import { createLogger } from '../../server/http/logger';
+import { createSmtpServer, Mailbox } from '../../server/fakes/smtp/mailbox';
+import { createLocalDiskStorage, type FileStorage } from '../../server/files/storage';
+import { createSmtpMailer } from '../../server/mail/mailer';
 import './provided';
 
 export interface ApiHarness {
   app: Express;
   store: Store;
+  /** Everything the API e-mailed during the test file. */
+  mailbox: Mailbox;
+  storage: FileStorage;
   /** A supertest agent already signed in as the user, with its CSRF token. */
   signedInAs(userId: string): Promise<{ agent: request.Agent; csrfToken: string; cookie: string }>;
   close(): Promise<void>;
@@ -24,8 +34,18 @@ export interface ApiHarness {
  * The real app, in-process, for API tests that are not about the sign-in flow itself.
  * Sessions are written into the real session store, exactly as the callback writes them.
  */
-export function buildApiHarness(db: Knex): ApiHarness {
+export async function buildApiHarness(db: Knex): Promise<ApiHarness> {
   const pool = new pg.Pool({ ...inject('database'), max: 3 });
+  const mailbox = new Mailbox();
+  const smtp = createSmtpServer(mailbox);
+  await new Promise<void>((resolve) => smtp.listen(0, '127.0.0.1', () => resolve()));
+  const mailer = createSmtpMailer({
+    host: '127.0.0.1',
+    port: (smtp.server.address() as AddressInfo).port,
+    from: 'Wardbook <no-reply@wardbook.example.com>',
+  });
+  const filesDir = await mkdtemp(path.join(os.tmpdir(), 'wardbook-files-'));
+  const storage = createLocalDiskStorage(filesDir);
   const store = createSessionStore(pool);
   const secret = randomBytes(32).toString('base64url');
   const app = createApp({
@@ -40,11 +60,16 @@ export function buildApiHarness(db: Knex): ApiHarness {
     sessionStore: store,
     sessionSecret: secret,
     appOrigins: ['http://127.0.0.1:3000'],
+    mailer,
+    storage,
+    idpIssuer: 'http://127.0.0.1:3001',
   });
 
   return {
     app,
     store,
+    mailbox,
+    storage,
     async signedInAs(userId) {
       const sid = randomBytes(24).toString('base64url');
       const maxAge = 60 * 60 * 1000;
@@ -69,6 +94,11 @@ export function buildApiHarness(db: Knex): ApiHarness {
       const me = await agent.get('/api/me');
       return { agent, csrfToken: me.body.csrfToken as string, cookie };
     },
-    close: () => pool.end(),
+    async close() {
+      mailer.close();
+      await new Promise((resolve) => smtp.close(() => resolve(undefined)));
+      await rm(filesDir, { recursive: true, force: true });
+      await pool.end();
+    },
   };
 }

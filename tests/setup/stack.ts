@@ -1,4 +1,7 @@
+import { mkdtemp, rm } from 'node:fs/promises';
 import { createServer } from 'node:http';
+import os from 'node:os';
+import path from 'node:path';
 import type { AddressInfo } from 'node:net';
 import pg from 'pg';
 import { createApp } from '../../server/app';
@@ -8,6 +11,7 @@ import { generateSecrets } from '../../server/config/secrets';
 import { createDb, type DatabaseConnection } from '../../server/db/knex';
 import { createMailViewer } from '../../server/fakes/smtp/viewer';
 import { createSmtpServer, Mailbox } from '../../server/fakes/smtp/mailbox';
+import { createLocalDiskStorage } from '../../server/files/storage';
 import { createLogger } from '../../server/http/logger';
 import { createSmtpMailer } from '../../server/mail/mailer';
 import { createIdpApp } from '../../idp/app';
@@ -52,6 +56,7 @@ export async function startStack(options: {
   const idpUrl = `http://127.0.0.1:${portOf(idpServer)}`;
   const mailUrl = `http://127.0.0.1:${portOf(viewerServer)}`;
   const secrets = generateSecrets();
+  const filesDir = await mkdtemp(path.join(os.tmpdir(), 'wardbook-files-'));
   const db = createDb(options.database, 10);
   const mailer = createSmtpMailer({
     host: '127.0.0.1',
@@ -86,6 +91,9 @@ export async function startStack(options: {
     sessionSecret: secrets.sessionSecret,
     appOrigins: [apiUrl],
     clientDir: options.clientDir,
+    mailer,
+    storage: createLocalDiskStorage(filesDir),
+    idpIssuer: idpUrl,
   });
   apiServer.on('request', app);
   viewerServer.on('request', createMailViewer(mailbox));
@@ -103,6 +111,7 @@ export async function startStack(options: {
       await new Promise((resolve) => smtp.close(() => resolve(undefined)));
       mailer.close();
       await Promise.all([db.destroy(), sessionPool.end()]);
+      await rm(filesDir, { recursive: true, force: true });
     },
   };
 }

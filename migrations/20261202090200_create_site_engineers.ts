@@ -1,0 +1,16 @@
+import type { Knex } from 'knex';
+
+export async function up(knex: Knex): Promise<void> {
+  await knex.schema.createTable('site_engineers', (table) => {
+    table.comment('Engineers the office has assigned to a site (every engineer can still see it).');
+    table.uuid('site_id').notNullable().references('sites.id').onDelete('CASCADE');
+    table.uuid('user_id').notNullable().references('users.id').onDelete('CASCADE');
+    table.timestamp('assigned_at', { useTz: true }).notNullable().defaultTo(knex.fn.now());
+    table.primary(['site_id', 'user_id']);
+    table.index(['user_id']);
+  });
+}
+
+export async function down(knex: Knex): Promise<void> {
+  await knex.schema.dropTable('site_engineers');
+}

@@ -1,0 +1,103 @@
+import { z } from 'zod';
+import { idSchema, trimmed, versionSchema } from '../schema/fields';
+
+export const PSU_TYPES = ['A', 'B', 'C'] as const;
+export const NOTIFICATION_OPTIONS = ['A', 'B', 'C', 'D', 'E', 'F'] as const;
+export const BEARERS = ['ip', 'cellular', 'pstn', 'radio'] as const;
+
+export const signallingPathSchema = z
+  .object({
+    bearer: z.enum(BEARERS, { error: 'Choose IP, cellular, telephone line or radio.' }),
+    atsCategory: trimmed(8, 'ATS category')
+      .regex(/^((SP|DP)\d)?$/i, 'Write the category as on the equipment, e.g. SP2 or DP3.')
+      .transform((value) => value.toUpperCase())
+      .default(''),
+    description: trimmed(200, 'Description').default(''),
+    toMonitoringCentre: z.boolean().default(true),
+  })
+  .strict();
+
+export const areaInputSchema = z
+  .object({
+    id: idSchema.optional(),
+    number: z.number().int().min(1, 'Area numbers start at 1.').max(99),
+    name: trimmed(60, 'Area name').min(1, 'Name the area, e.g. Ground floor.'),
+  })
+  .strict();
+
+export const saveSystemSchema = z
+  .object({
+    controlPanel: trimmed(120, 'Control panel').default(''),
+    firmware: trimmed(60, 'Firmware').default(''),
+    panelLocation: trimmed(120, 'Panel location').default(''),
+    psuType: z.enum(PSU_TYPES).nullable().default(null),
+    batteryAh: z
+      .number()
+      .positive('Battery capacity must be more than 0 Ah.')
+      .max(200, 'That is more than 200 Ah; enter the capacity in ampere-hours.')
+      .nullable()
+      .default(null),
+    notification: z.enum(NOTIFICATION_OPTIONS).nullable().default(null),
+    mainsFailureSignalled: z.boolean().default(false),
+    signallingPaths: z
+      .array(signallingPathSchema)
+      .max(4, 'At most four signalling paths.')
+      .default([]),
+    areas: z.array(areaInputSchema).max(32).default([]),
+    /** null when the system is recorded for the first time. */
+    version: versionSchema.nullable(),
+  })
+  .strict()
+  .superRefine((system, context) => {
+    const seen = new Map<number, number>();
+    system.areas.forEach((area, index) => {
+      const first = seen.get(area.number);
+      if (first !== undefined) {
+        context.addIssue({
+          code: 'custom',
+          path: ['areas', index, 'number'],
+          message: `Area ${area.number} is already used in row ${first + 1}.`,
+        });
+      } else seen.set(area.number, index);
+    });
+    if (system.psuType === 'C' && system.batteryAh !== null) {
+      context.addIssue({
+        code: 'custom',
+        path: ['batteryAh'],
+        message: 'A type C power supply has no standby battery of its own.',
+      });
+    }
+  });
+export type SaveSystemInput = z.input<typeof saveSystemSchema>;
+
+// --- Responses ---------------------------------------------------------------------------------
+
+export const areaSchema = z.object({ id: z.string(), number: z.number(), name: z.string() });
+export type Area = z.infer<typeof areaSchema>;
+
+export const systemSchema = z.object({
+  id: z.string(),
+  controlPanel: z.string(),
+  firmware: z.string(),
+  panelLocation: z.string(),
+  psuType: z.enum(PSU_TYPES).nullable(),
+  batteryAh: z.number().nullable(),
+  notification: z.enum(NOTIFICATION_OPTIONS).nullable(),
+  mainsFailureSignalled: z.boolean(),
+  signallingPaths: z.array(
+    z.object({
+      id: z.string(),
+      position: z.number(),
+      bearer: z.enum(BEARERS),
+      atsCategory: z.string(),
+      description: z.string(),
+      toMonitoringCentre: z.boolean(),
+    }),
+  ),
+  areas: z.array(areaSchema),
+  version: z.number(),
+  updatedAt: z.string(),
+});
+export type SystemRecord = z.infer<typeof systemSchema>;
+
+export const systemResponseSchema = z.object({ system: systemSchema.nullable() });
