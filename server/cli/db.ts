@@ -2,6 +2,7 @@ import { writeFile } from 'node:fs/promises';
 import path from 'node:path';
 import { loadConfig } from '../config/config';
 import { createDb } from '../db/knex';
+import { createLocalDiskStorage } from '../files/storage';
 import { migrateToLatest, migrationSource, MIGRATIONS_TABLE, runSeeds } from '../db/migrate';
 import { migrationsDir } from '../paths';
 import { openLocalDatabase } from './prepare-database';
@@ -51,7 +52,7 @@ async function main() {
         undone.length ? `rolled back:\n  ${undone.join('\n  ')}` : 'nothing to roll back',
       );
     } else if (command === 'seed') {
-      await runSeeds(db);
+      await runSeeds(db, { storage: createLocalDiskStorage(path.join(config.dataDir, 'files')) });
       console.log('seeds run (the demo is only added to an empty database)');
     } else {
       throw new Error(`unknown command "${command}"; use migrate, rollback, seed or make`);

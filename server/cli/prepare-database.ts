@@ -1,6 +1,7 @@
 import path from 'node:path';
 import type { Config } from '../config/config';
 import { createDb } from '../db/knex';
+import { createLocalDiskStorage } from '../files/storage';
 import { migrateToLatest, runSeeds } from '../db/migrate';
 import { ensureDatabase, startPostgres, type RunningPostgres } from '../db/postgres-server';
 
@@ -28,7 +29,8 @@ export async function prepareDatabase(
   try {
     const applied = await migrateToLatest(db);
     if (applied.length) options.log(`applied ${applied.length} migration(s)`);
-    if (options.seed) await runSeeds(db);
+    if (options.seed)
+      await runSeeds(db, { storage: createLocalDiskStorage(path.join(config.dataDir, 'files')) });
   } finally {
     await db.destroy();
   }

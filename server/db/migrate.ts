@@ -2,6 +2,7 @@ import { readdir } from 'node:fs/promises';
 import path from 'node:path';
 import { pathToFileURL } from 'node:url';
 import type { Knex } from 'knex';
+import type { FileStorage } from '../files/storage';
 import { migrationsDir, seedsDir } from '../paths';
 
 interface MigrationModule {
@@ -9,8 +10,13 @@ interface MigrationModule {
   down(knex: Knex): Promise<void>;
 }
 
+export interface SeedContext {
+  /** Where demo files are written; seeds leave files out without it. */
+  storage?: FileStorage;
+}
+
 interface SeedModule {
-  seed(knex: Knex): Promise<void>;
+  seed(knex: Knex, context: SeedContext): Promise<void>;
 }
 
 const TS_MODULE = /^\d.*\.ts$/;
@@ -49,9 +55,9 @@ export async function rollbackAll(db: Knex): Promise<string[]> {
 }
 
 /** Runs every seed file in order; each seed decides for itself whether it has work to do. */
-export async function runSeeds(db: Knex): Promise<void> {
+export async function runSeeds(db: Knex, context: SeedContext = {}): Promise<void> {
   for (const name of await moduleFiles(seedsDir)) {
     const seedModule = (await import(pathToFileURL(path.join(seedsDir, name)).href)) as SeedModule;
-    await seedModule.seed(db);
+    await seedModule.seed(db, context);
   }
 }

@@ -7,6 +7,7 @@ import {
   required,
   trimmed,
   versionSchema,
+  withoutDefaults,
 } from '../schema/fields';
 
 export const unavailableSchema = z
@@ -44,7 +45,7 @@ export const createKeyholderSchema = z.object(keyholderFields).strict();
 export type CreateKeyholderInput = z.input<typeof createKeyholderSchema>;
 
 export const updateKeyholderSchema = z
-  .object({ ...keyholderFields, version: versionSchema })
+  .object({ ...withoutDefaults(keyholderFields), version: versionSchema })
   .partial()
   .required({ version: true })
   .strict();

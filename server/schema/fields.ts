@@ -85,3 +85,20 @@ export const milliampsSchema = z
   .number({ error: 'Enter the current in mA.' })
   .min(0, 'Currents cannot be negative.')
   .max(5000, 'That is more than 5 A; enter the current in mA.');
+
+type WithoutDefault<T> = T extends z.ZodDefault<infer Inner> ? Inner : T;
+
+/**
+ * The same fields with their defaults taken off, for partial updates: zod applies a default
+ * to a missing key even inside .partial(), which would overwrite stored values.
+ */
+export function withoutDefaults<Shape extends z.ZodRawShape>(
+  shape: Shape,
+): { [Key in keyof Shape]: WithoutDefault<Shape[Key]> } {
+  return Object.fromEntries(
+    Object.entries(shape).map(([key, field]) => [
+      key,
+      field instanceof z.ZodDefault ? field.unwrap() : field,
+    ]),
+  ) as { [Key in keyof Shape]: WithoutDefault<Shape[Key]> };
+}

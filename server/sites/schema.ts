@@ -8,6 +8,7 @@ import {
   required,
   trimmed,
   versionSchema,
+  withoutDefaults,
 } from '../schema/fields';
 
 export const URN_STATUSES = ['none', 'applied', 'active', 'warning', 'withdrawn'] as const;
@@ -81,7 +82,7 @@ export const createSiteSchema = z
 export type CreateSiteInput = z.input<typeof createSiteSchema>;
 
 export const updateSiteSchema = z
-  .object({ ...siteFields, version: versionSchema })
+  .object({ ...withoutDefaults(siteFields), version: versionSchema })
   .partial()
   .required({ version: true })
   .strict();

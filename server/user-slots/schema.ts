@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { dateSchema, required, versionSchema } from '../schema/fields';
+import { dateSchema, required, versionSchema, withoutDefaults } from '../schema/fields';
 
 /**
  * EN 50131-1 access levels: 2 for users who set and unset, 3 for the engineer who maintains
@@ -40,7 +40,7 @@ export const createUserSlotSchema = z
 export type CreateUserSlotInput = z.input<typeof createUserSlotSchema>;
 
 export const updateUserSlotSchema = z
-  .object({ ...slotFields, active: z.boolean(), version: versionSchema })
+  .object({ ...withoutDefaults(slotFields), active: z.boolean(), version: versionSchema })
   .partial()
   .required({ version: true })
   .strict()

@@ -1,0 +1,520 @@
+import type { Knex } from 'knex';
+import request from 'supertest';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { ROLES, type Role } from '../../server/users/roles';
+import { buildApiHarness } from '../setup/api-app';
+import { closeTestDb, testDb } from '../setup/database';
+import { listRoutes } from '../setup/routes';
+import { createPerson } from '../setup/factories';
+import { createSiteWorld, type SiteFixture, type SiteWorld } from '../setup/site-fixtures';
+
+/**
+ * Every route of the API, every role, against a record of their own and one of someone else's.
+ * A route missing from MATRIX fails the first test: new routes cannot slip in unguarded.
+ */
+const db = testDb();
+const harness = await buildApiHarness(db);
+let world: SiteWorld;
+
+beforeAll(async () => {
+  world = await createSiteWorld(db);
+});
+afterAll(async () => {
+  await harness.close();
+  await closeTestDb();
+});
+
+type Target = 'own' | 'other';
+interface Call {
+  path: string;
+  body?: unknown;
+  file?: { name: string; bytes: Buffer };
+}
+interface Entry {
+  /** Roles that may use the route on their own record; 'public' needs no sign-in. */
+  allowed: readonly Role[] | 'public' | 'anyone-signed-in';
+  /** Whether the route addresses a record (site, organisation, home): someone else's is a 404. */
+  scoped: boolean;
+  call(target: Target, role: Role): Promise<Call>;
+}
+
+const STAFF = ['engineer', 'office'] as const;
+const READERS = ['engineer', 'office', 'operator', 'homeowner'] as const;
+const KEEPERS = ['engineer', 'office', 'homeowner'] as const;
+const PNG = Buffer.from(
+  'iVBORw0KGgoAAAANSUhEUgAAAAEAAAABCAIAAACQd1PeAAAADElEQVR4nGP4z8AAAAMBAQDJ/pLvAAAAAElFTkSuQmCC',
+  'base64',
+);
+
+const site = (target: Target): SiteFixture => world[target];
+const personOf = (role: Role) => world[role];
+const version = async (table: string, where: Record<string, unknown>, column = 'version') =>
+  ((await db(table).where(where).first(column)) as Record<string, number>)[column]!;
+
+async function freshKeyholder(dbHandle: Knex, siteId: string, email: string | null = null) {
+  const [row] = await dbHandle('keyholders')
+    .insert({
+      site_id: siteId,
+      call_order: dbHandle.raw(
+        '(select coalesce(max(call_order), 0) + 1 from keyholders where site_id = ?)',
+        [siteId],
+      ),
+      name: 'Matrix Keyholder',
+      phone: '+447700900555',
+      email,
+      minutes_to_attend: 10,
+    })
+    .returning<{ id: string }[]>('id');
+  return row!.id;
+}
+
+async function freshSlot(siteId: string) {
+  const [row] = await db('user_code_slots')
+    .insert({
+      site_id: siteId,
+      slot: db.raw('(select coalesce(max(slot), 1) + 1 from user_code_slots where site_id = ?)', [
+        siteId,
+      ]),
+      holder_name: 'Matrix user',
+      access_level: 2,
+    })
+    .returning<{ id: string }[]>('id');
+  return row!.id;
+}
+
+async function freshFile(siteId: string, uploadedBy: string) {
+  const key = `sites/${siteId}/${crypto.randomUUID()}`;
+  await harness.storage.put(key, PNG);
+  const [row] = await db('site_files')
+    .insert({
+      site_id: siteId,
+      storage_key: key,
+      file_name: 'matrix.png',
+      content_type: 'image/png',
+      size_bytes: PNG.length,
+      sha256: 'matrix',
+      uploaded_by: uploadedBy,
+    })
+    .returning<{ id: string }[]>('id');
+  return row!.id;
+}
+
+/** A person's own organisation (the centre for operators), or the other site's. */
+async function organisationFor(target: Target, role: Role) {
+  const column = role === 'operator' ? 'monitoring_centre_id' : 'installer_id';
+  const row = await db('sites')
+    .where({ id: site(target).siteId })
+    .first(column);
+  return row[column] as string;
+}
+
+async function freshHomeowner(siteId: string) {
+  const person = await createPerson(db, { memberships: [{ role: 'homeowner' }] });
+  await db('site_homeowners').insert({ site_id: siteId, user_id: person.userId });
+  return person.userId;
+}
+
+const validSite = {
+  name: 'Matrix house',
+  premisesType: 'domestic',
+  addressLine1: '2 Matrix Road',
+  town: 'Eastmere',
+  postcode: 'EM1 2AB',
+  requiredGrade: 2,
+  environmentalClass: 2,
+};
+
+const MATRIX: Record<string, Entry> = {
+  'GET /api/health': {
+    allowed: 'public',
+    scoped: false,
+    call: async () => ({ path: '/api/health' }),
+  },
+  'GET /api/me': {
+    allowed: 'anyone-signed-in',
+    scoped: false,
+    call: async () => ({ path: '/api/me' }),
+  },
+  'GET /api/homes/:role': {
+    allowed: ROLES,
+    scoped: false,
+    call: async (_target, role) => ({ path: `/api/homes/${role}` }),
+  },
+  'GET /api/organisations/:organisationId': {
+    allowed: ['engineer', 'office', 'operator'],
+    scoped: true,
+    call: async (target, role) => ({
+      path: `/api/organisations/${await organisationFor(target, role)}`,
+    }),
+  },
+  'GET /api/organisations/:organisationId/members': {
+    allowed: ['office', 'operator'],
+    scoped: true,
+    call: async (target, role) => ({
+      path: `/api/organisations/${await organisationFor(target, role)}/members`,
+    }),
+  },
+  'GET /api/organisations/:organisationId/audit': {
+    allowed: ['office'],
+    scoped: true,
+    call: async (target, role) => ({
+      path: `/api/organisations/${await organisationFor(target, role)}/audit`,
+    }),
+  },
+  'GET /api/sites': {
+    allowed: ['engineer', 'office', 'operator'],
+    scoped: false,
+    call: async () => ({ path: '/api/sites' }),
+  },
+  'POST /api/sites': {
+    allowed: STAFF,
+    scoped: false,
+    call: async () => ({ path: '/api/sites', body: validSite }),
+  },
+  'GET /api/monitoring-centres': {
+    allowed: STAFF,
+    scoped: false,
+    call: async () => ({ path: '/api/monitoring-centres' }),
+  },
+  'GET /api/sites/:siteId': {
+    allowed: ['engineer', 'office', 'operator'],
+    scoped: true,
+    call: async (target) => ({ path: `/api/sites/${site(target).siteId}` }),
+  },
+  'PATCH /api/sites/:siteId': {
+    allowed: STAFF,
+    scoped: true,
+    call: async (target) => ({
+      path: `/api/sites/${site(target).siteId}`,
+      body: {
+        accessNotes: 'Matrix note',
+        version: await version('sites', { id: site(target).siteId }),
+      },
+    }),
+  },
+  'PUT /api/sites/:siteId/engineers': {
+    allowed: ['office'],
+    scoped: true,
+    call: async (target) => ({
+      path: `/api/sites/${site(target).siteId}/engineers`,
+      body: { userIds: [world.engineer.userId] },
+    }),
+  },
+  'POST /api/sites/:siteId/homeowners': {
+    allowed: ['office'],
+    scoped: true,
+    call: async (target) => ({
+      path: `/api/sites/${site(target).siteId}/homeowners`,
+      body: {
+        displayName: 'Matrix Owner',
+        email: `owner-${crypto.randomUUID().slice(0, 8)}@example.com`,
+      },
+    }),
+  },
+  'DELETE /api/sites/:siteId/homeowners/:userId': {
+    allowed: ['office'],
+    scoped: true,
+    call: async (target) => ({
+      path: `/api/sites/${site(target).siteId}/homeowners/${await freshHomeowner(site(target).siteId)}`,
+    }),
+  },
+  'GET /api/sites/:siteId/system': {
+    allowed: READERS,
+    scoped: true,
+    call: async (target) => ({ path: `/api/sites/${site(target).siteId}/system` }),
+  },
+  'PUT /api/sites/:siteId/system': {
+    allowed: STAFF,
+    scoped: true,
+    call: async (target) => ({
+      path: `/api/sites/${site(target).siteId}/system`,
+      body: {
+        controlPanel: 'Matrix panel',
+        version: await version('systems', { site_id: site(target).siteId }),
+      },
+    }),
+  },
+  'GET /api/sites/:siteId/zones': {
+    allowed: READERS,
+    scoped: true,
+    call: async (target) => ({ path: `/api/sites/${site(target).siteId}/zones` }),
+  },
+  'PUT /api/sites/:siteId/zones': {
+    allowed: STAFF,
+    scoped: true,
+    call: async (target) => ({
+      path: `/api/sites/${site(target).siteId}/zones`,
+      body: {
+        zonesVersion: await version('systems', { site_id: site(target).siteId }, 'zones_version'),
+        zones: site(target).zoneIds.map((id, index) => ({
+          id,
+          number: index + 1,
+          location: `Room ${index + 1}`,
+          zoneType: 'instant',
+          detectorKind: 'pir',
+          loopWiring: 'two_resistor',
+          tamperOhms: 2200,
+          alarmOhms: 4700,
+        })),
+      },
+    }),
+  },
+  'GET /api/sites/:siteId/devices': {
+    allowed: READERS,
+    scoped: true,
+    call: async (target) => ({ path: `/api/sites/${site(target).siteId}/devices` }),
+  },
+  'PUT /api/sites/:siteId/devices': {
+    allowed: STAFF,
+    scoped: true,
+    call: async (target) => ({
+      path: `/api/sites/${site(target).siteId}/devices`,
+      body: {
+        devicesVersion: await version(
+          'systems',
+          { site_id: site(target).siteId },
+          'devices_version',
+        ),
+        devices: [{ kind: 'keypad', location: 'Hall' }],
+      },
+    }),
+  },
+  'GET /api/sites/:siteId/keyholders': {
+    allowed: READERS,
+    scoped: true,
+    call: async (target) => ({ path: `/api/sites/${site(target).siteId}/keyholders` }),
+  },
+  'POST /api/sites/:siteId/keyholders': {
+    allowed: KEEPERS,
+    scoped: true,
+    call: async (target) => ({
+      path: `/api/sites/${site(target).siteId}/keyholders`,
+      body: { name: 'New Keyholder', phone: '07700 900123', minutesToAttend: 12 },
+    }),
+  },
+  'PUT /api/sites/:siteId/keyholders/order': {
+    allowed: KEEPERS,
+    scoped: true,
+    call: async (target) => ({
+      path: `/api/sites/${site(target).siteId}/keyholders/order`,
+      body: {
+        keyholderIds: await db('keyholders')
+          .where({ site_id: site(target).siteId })
+          .orderBy('call_order', 'desc')
+          .pluck('id'),
+      },
+    }),
+  },
+  'PATCH /api/sites/:siteId/keyholders/:keyholderId': {
+    allowed: KEEPERS,
+    scoped: true,
+    call: async (target) => ({
+      path: `/api/sites/${site(target).siteId}/keyholders/${site(target).keyholderId}`,
+      body: {
+        relation: 'Neighbour',
+        version: await version('keyholders', { id: site(target).keyholderId }),
+      },
+    }),
+  },
+  'DELETE /api/sites/:siteId/keyholders/:keyholderId': {
+    allowed: KEEPERS,
+    scoped: true,
+    call: async (target) => ({
+      path: `/api/sites/${site(target).siteId}/keyholders/${await freshKeyholder(db, site(target).siteId)}`,
+    }),
+  },
+  'POST /api/sites/:siteId/keyholders/:keyholderId/confirm': {
+    allowed: KEEPERS,
+    scoped: true,
+    call: async (target) => ({
+      path: `/api/sites/${site(target).siteId}/keyholders/${site(target).keyholderId}/confirm`,
+    }),
+  },
+  'POST /api/sites/:siteId/keyholders/:keyholderId/invitation': {
+    allowed: ['office', 'homeowner'],
+    scoped: true,
+    call: async (target) => ({
+      path: `/api/sites/${site(target).siteId}/keyholders/${await freshKeyholder(
+        db,
+        site(target).siteId,
+        `kh-${crypto.randomUUID().slice(0, 8)}@example.com`,
+      )}/invitation`,
+    }),
+  },
+  'GET /api/sites/:siteId/user-slots': {
+    allowed: KEEPERS,
+    scoped: true,
+    call: async (target) => ({ path: `/api/sites/${site(target).siteId}/user-slots` }),
+  },
+  'POST /api/sites/:siteId/user-slots': {
+    allowed: KEEPERS,
+    scoped: true,
+    call: async (target) => ({
+      path: `/api/sites/${site(target).siteId}/user-slots`,
+      body: {
+        slot:
+          Number(
+            await db('user_code_slots')
+              .where({ site_id: site(target).siteId })
+              .max('slot as m')
+              .first()
+              .then((r) => r!.m),
+          ) + 1,
+        holderName: 'Cleaner',
+        accessLevel: 2,
+      },
+    }),
+  },
+  'PATCH /api/sites/:siteId/user-slots/:slotId': {
+    allowed: KEEPERS,
+    scoped: true,
+    call: async (target) => ({
+      path: `/api/sites/${site(target).siteId}/user-slots/${site(target).slotId}`,
+      body: {
+        holderName: 'Renamed',
+        version: await version('user_code_slots', { id: site(target).slotId }),
+      },
+    }),
+  },
+  'DELETE /api/sites/:siteId/user-slots/:slotId': {
+    allowed: STAFF,
+    scoped: true,
+    call: async (target) => ({
+      path: `/api/sites/${site(target).siteId}/user-slots/${await freshSlot(site(target).siteId)}`,
+    }),
+  },
+  'GET /api/sites/:siteId/files': {
+    allowed: READERS,
+    scoped: true,
+    call: async (target) => ({ path: `/api/sites/${site(target).siteId}/files` }),
+  },
+  'POST /api/sites/:siteId/files': {
+    allowed: KEEPERS,
+    scoped: true,
+    call: async (target) => ({
+      path: `/api/sites/${site(target).siteId}/files`,
+      file: { name: 'photo.png', bytes: PNG },
+    }),
+  },
+  'GET /api/sites/:siteId/files/:fileId/content': {
+    allowed: READERS,
+    scoped: true,
+    call: async (target) => ({
+      path: `/api/sites/${site(target).siteId}/files/${await freshFile(site(target).siteId, world.engineer.userId)}/content`,
+    }),
+  },
+  'DELETE /api/sites/:siteId/files/:fileId': {
+    allowed: KEEPERS,
+    scoped: true,
+    // Uploaded by the person asking, so a homeowner may remove it too.
+    call: async (target, role) => ({
+      path: `/api/sites/${site(target).siteId}/files/${await freshFile(site(target).siteId, personOf(role).userId)}`,
+    }),
+  },
+  'GET /api/sites/:siteId/change-requests': {
+    allowed: KEEPERS,
+    scoped: true,
+    call: async (target) => ({ path: `/api/sites/${site(target).siteId}/change-requests` }),
+  },
+  'POST /api/sites/:siteId/change-requests': {
+    allowed: ['homeowner'],
+    scoped: true,
+    call: async (target) => ({
+      path: `/api/sites/${site(target).siteId}/change-requests`,
+      body: { subject: 'Move the keypad', details: 'Closer to the front door, please.' },
+    }),
+  },
+  'PATCH /api/sites/:siteId/change-requests/:requestId': {
+    allowed: STAFF,
+    scoped: true,
+    call: async (target) => ({
+      path: `/api/sites/${site(target).siteId}/change-requests/${site(target).changeRequestId}`,
+      body: { status: 'closed' },
+    }),
+  },
+  'GET /api/my/homes': {
+    allowed: ['homeowner'],
+    scoped: false,
+    call: async () => ({ path: '/api/my/homes' }),
+  },
+  'GET /api/my/homes/:siteId': {
+    allowed: ['homeowner'],
+    scoped: true,
+    call: async (target) => ({ path: `/api/my/homes/${site(target).siteId}` }),
+  },
+  'GET /api/my/keyholdings': {
+    allowed: ['keyholder'],
+    scoped: false,
+    call: async () => ({ path: '/api/my/keyholdings' }),
+  },
+};
+
+// Sign-in routes and the client's pages are outside the API; they have their own tests.
+const NOT_API = (route: string) => !route.includes(' /api/');
+
+function method(route: string) {
+  return route.split(' ')[0]!.toLowerCase() as 'get' | 'post' | 'put' | 'patch' | 'delete';
+}
+
+async function send(agent: request.Agent, csrfToken: string, route: string, call: Call) {
+  const verb = method(route);
+  let pending = agent[verb](call.path);
+  if (verb !== 'get') pending = pending.set('x-csrf-token', csrfToken);
+  if (call.file) return pending.attach('file', call.file.bytes, call.file.name);
+  return call.body === undefined ? pending : pending.send(call.body as object);
+}
+
+describe('authorization matrix', () => {
+  it('has an entry for every API route', () => {
+    const apiRoutes = listRoutes(harness.app).filter((route) => !NOT_API(route));
+    const missing = apiRoutes.filter((route) => !(route in MATRIX));
+    expect(missing, 'routes without a matrix entry').toEqual([]);
+    const stale = Object.keys(MATRIX).filter((route) => !apiRoutes.includes(route));
+    expect(stale, 'matrix entries for routes that no longer exist').toEqual([]);
+  });
+
+  it('refuses every route to someone not signed in, except the public ones', async () => {
+    for (const [route, entry] of Object.entries(MATRIX)) {
+      const call = await entry.call('own', 'engineer');
+      const response = await request(harness.app)[method(route)](call.path);
+      if (entry.allowed === 'public') expect(response.status, route).toBeLessThan(400);
+      // Writes without a session also lack a CSRF token; either refusal is right.
+      else expect([401, 403], route).toContain(response.status);
+    }
+  });
+
+  for (const role of ROLES) {
+    it(`gives a ${role} exactly their routes, on their own records only`, async () => {
+      const { agent, csrfToken } = await harness.signedInAs(personOf(role).userId);
+      const outcomes: string[] = [];
+      for (const [route, entry] of Object.entries(MATRIX)) {
+        if (entry.allowed === 'public') continue;
+        const allowed = entry.allowed === 'anyone-signed-in' || entry.allowed.includes(role);
+        const own = await send(agent, csrfToken, route, await entry.call('own', role));
+        const ownOk = allowed ? own.status >= 200 && own.status < 300 : own.status === 403;
+        if (!ownOk)
+          outcomes.push(`${route} own: ${own.status} ${JSON.stringify(own.body).slice(0, 200)}`);
+        if (entry.scoped) {
+          const other = await send(agent, csrfToken, route, await entry.call('other', role));
+          // Someone else's record: 404 where the role could use the route, 403 where it never could.
+          const expected = allowed ? 404 : [403, 404];
+          const otherOk = Array.isArray(expected)
+            ? expected.includes(other.status)
+            : other.status === expected;
+          if (!otherOk) outcomes.push(`${route} other: ${other.status}`);
+        }
+      }
+      expect(outcomes, `unexpected answers for ${role}`).toEqual([]);
+    });
+  }
+
+  it("never lists another installer's or centre's sites", async () => {
+    for (const role of ['engineer', 'office', 'operator'] as const) {
+      const { agent } = await harness.signedInAs(personOf(role).userId);
+      const { body } = await agent.get('/api/sites?pageSize=100');
+      const ids = body.items.map((item: { id: string }) => item.id);
+      expect(ids, role).toContain(world.own.siteId);
+      expect(ids, role).not.toContain(world.other.siteId);
+    }
+  });
+});
