@@ -43,23 +43,34 @@ export const saveSystemSchema = z
       .array(signallingPathSchema)
       .max(4, 'At most four signalling paths.')
       .default([]),
-    areas: z.array(areaInputSchema).max(32).default([]),
+    areas: z
+      .array(areaInputSchema)
+      .max(32)
+      // Checked even when other rows have mistakes, so every problem shows at once.
+      .superRefine(
+        (areas, context) => {
+          const seen = new Map<number, number>();
+          areas.forEach((area, index) => {
+            const number = (area as { number?: unknown } | null)?.number;
+            if (typeof number !== 'number') return;
+            const first = seen.get(number);
+            if (first !== undefined) {
+              context.addIssue({
+                code: 'custom',
+                path: [index, 'number'],
+                message: `Area ${number} is already used in row ${first + 1}.`,
+              });
+            } else seen.set(number, index);
+          });
+        },
+        { when: () => true },
+      )
+      .default([]),
     /** null when the system is recorded for the first time. */
     version: versionSchema.nullable(),
   })
   .strict()
   .superRefine((system, context) => {
-    const seen = new Map<number, number>();
-    system.areas.forEach((area, index) => {
-      const first = seen.get(area.number);
-      if (first !== undefined) {
-        context.addIssue({
-          code: 'custom',
-          path: ['areas', index, 'number'],
-          message: `Area ${area.number} is already used in row ${first + 1}.`,
-        });
-      } else seen.set(area.number, index);
-    });
     if (system.psuType === 'C' && system.batteryAh !== null) {
       context.addIssue({
         code: 'custom',

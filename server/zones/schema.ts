@@ -115,9 +115,10 @@ export const CORE_COLOURS = [
  */
 export const resistorOhmsSchema = z
   .number({ error: 'Enter the resistor value in ohms, e.g. 2200 for 2k2.' })
-  .int('Enter whole ohms, e.g. 4700 for 4k7.')
   .min(10, 'Resistor values start at 10 Ω. Enter ohms: 2200, not 2.2.')
-  .max(100_000, 'That is over 100 kΩ. Enter ohms, e.g. 4700 for 4k7.');
+  .max(100_000, 'That is over 100 kΩ. Enter ohms, e.g. 4700 for 4k7.')
+  // A refinement rather than .int(): zod's .int() stops other rows' checks from running.
+  .refine(Number.isInteger, 'Enter whole ohms, e.g. 4700 for 4k7.');
 
 export const coreConnectionSchema = z
   .object({
@@ -131,9 +132,9 @@ export const zoneInputSchema = z
     id: idSchema.optional(),
     number: z
       .number({ error: 'Enter the zone number.' })
-      .int('Zone numbers are whole numbers.')
       .min(1, 'Zone numbers start at 1.')
-      .max(999, 'Zone numbers go up to 999.'),
+      .max(999, 'Zone numbers go up to 999.')
+      .refine(Number.isInteger, 'Zone numbers are whole numbers.'),
     location: trimmed(120, 'Location').min(1, 'Say where the detector is, e.g. Hall.'),
     zoneType: z.enum(ZONE_TYPES, { error: 'Choose the zone type.' }),
     detectorKind: z.enum(DETECTOR_KINDS, { error: 'Choose the detector kind.' }),
@@ -174,33 +175,41 @@ export const zoneInputSchema = z
   });
 export type ZoneInput = z.input<typeof zoneInputSchema>;
 
+/** Numbers must be unique within a schedule; checked even when other rows have mistakes. */
+function flagDuplicateNumbers(zones: unknown[], context: z.RefinementCtx) {
+  const firstRow = new Map<number, number>();
+  zones.forEach((zone, index) => {
+    const number = (zone as { number?: unknown } | null)?.number;
+    if (typeof number !== 'number') return;
+    const first = firstRow.get(number);
+    if (first !== undefined) {
+      context.addIssue({
+        code: 'custom',
+        path: [index, 'number'],
+        message: `Zone ${number} is already used in row ${first + 1}.`,
+      });
+    } else firstRow.set(number, index);
+  });
+  const ids = zones.map((zone) => (zone as { id?: unknown } | null)?.id).filter(Boolean);
+  if (new Set(ids).size !== ids.length) {
+    context.addIssue({
+      code: 'custom',
+      path: [],
+      message: 'A zone appears twice in the schedule.',
+    });
+  }
+}
+
 export const saveZonesSchema = z
   .object({
     zonesVersion: versionSchema,
-    zones: z.array(zoneInputSchema).max(512, 'A schedule holds at most 512 zones.'),
+    zones: z
+      .array(zoneInputSchema)
+      .max(512, 'A schedule holds at most 512 zones.')
+      // The rows are read defensively because this runs even when some failed their checks.
+      .superRefine((zones, context) => flagDuplicateNumbers(zones, context), { when: () => true }),
   })
-  .strict()
-  .superRefine(({ zones }, context) => {
-    const firstRow = new Map<number, number>();
-    zones.forEach((zone, index) => {
-      const first = firstRow.get(zone.number);
-      if (first !== undefined) {
-        context.addIssue({
-          code: 'custom',
-          path: ['zones', index, 'number'],
-          message: `Zone ${zone.number} is already used in row ${first + 1}.`,
-        });
-      } else firstRow.set(zone.number, index);
-    });
-    const ids = zones.map((zone) => zone.id).filter(Boolean);
-    if (new Set(ids).size !== ids.length) {
-      context.addIssue({
-        code: 'custom',
-        path: ['zones'],
-        message: 'A zone appears twice in the schedule.',
-      });
-    }
-  });
+  .strict();
 export type SaveZonesInput = z.input<typeof saveZonesSchema>;
 
 // --- Responses ---------------------------------------------------------------------------------
