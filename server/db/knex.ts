@@ -11,6 +11,8 @@ export interface DatabaseConnection {
 
 // Counts and bigint ids arrive as strings by default; Wardbook's counts fit in a JS number.
 pg.types.setTypeParser(pg.types.builtins.INT8, (value) => Number(value));
+// Calendar dates stay "YYYY-MM-DD": turning them into instants would let time zones move them.
+pg.types.setTypeParser(pg.types.builtins.DATE, (value) => value);
 
 export function knexConfig(connection: DatabaseConnection, poolMax = 10): Knex.Config {
   return { client: 'pg', connection, pool: { min: 0, max: poolMax } };
