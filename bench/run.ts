@@ -19,6 +19,7 @@ import { createLocalDiskStorage } from '../server/files/storage';
 import { createLogger } from '../server/http/logger';
 import { createSmtpMailer } from '../server/mail/mailer';
 import { repoRoot } from '../server/paths';
+import { benchRecords } from './records';
 
 /**
  * `npm run bench`: prints figures, never passes or fails on them.
@@ -27,6 +28,7 @@ import { repoRoot } from '../server/paths';
  *   2. requests per second for GET /api/health against a bare Express handler, same run,
  *      same machine, as a ratio.
  *   3. the client's initial JavaScript, gzipped.
+ *   4. the as-fitted record at one company's scale (bench/records.ts).
  */
 const RUNS = Number(process.env.BENCH_RUNS ?? 3);
 const median = (values: number[]) => {
@@ -148,6 +150,13 @@ async function initialJavaScriptGzipped() {
 
 const kib = (bytes: number) => `${(bytes / 1024).toFixed(1)} KiB`;
 
+// `npm run bench -- records` runs only the as-fitted record benchmark.
+const only = process.argv[2];
+if (only === 'records') {
+  await benchRecords();
+  process.exit(0);
+}
+
 console.log(`Wardbook benchmarks (${RUNS} runs each, medians)\n`);
 
 const starts: number[] = [];
@@ -166,6 +175,8 @@ const js = await initialJavaScriptGzipped();
 console.log(
   `client initial JavaScript: ${kib(js.gzipped)} gzipped (${kib(js.raw)} raw, ${js.files} file(s))`,
 );
+
+await benchRecords();
 
 if (existsSync(path.join(repoRoot, '.data', 'bench-client')))
   rmSync(path.join(repoRoot, '.data', 'bench-client'), { recursive: true });

@@ -27,9 +27,28 @@ declare module 'express-session' {
 export const SESSION_COOKIE = 'wardbook.sid';
 const EIGHT_HOURS = 8 * 60 * 60 * 1000;
 
+/** How often an active session's expiry is pushed back in the database. */
+const TOUCH_INTERVAL_MS = 5 * 60 * 1000;
+
 export function createSessionStore(pool: pg.Pool): Store {
   const PgStore = connectPgSimple(session);
-  return new PgStore({ pool, tableName: 'sessions', createTableIfMissing: false });
+  const store = new PgStore({ pool, tableName: 'sessions', createTableIfMissing: false });
+  // express-session touches the stored session on every request; a write per read is wasted
+  // work, so within a few minutes of the last touch (by this process) it is skipped. The
+  // session still lasts eight hours from its last use, give or take those minutes.
+  const touch = store.touch.bind(store);
+  const lastTouched = new Map<string, number>();
+  store.touch = (sid, sess, callback) => {
+    const now = Date.now();
+    if (now - (lastTouched.get(sid) ?? 0) < TOUCH_INTERVAL_MS) return callback?.();
+    if (lastTouched.size > 10_000) {
+      for (const [key, at] of lastTouched)
+        if (now - at >= TOUCH_INTERVAL_MS) lastTouched.delete(key);
+    }
+    lastTouched.set(sid, now);
+    touch(sid, sess, callback);
+  };
+  return store;
 }
 
 export function sessionMiddleware(options: {

@@ -127,18 +127,16 @@ interface SiteListRow {
   monitoring_centre_name: string | null;
   zone_count: number;
   engineers: { id: string; displayName: string }[];
-  total: number;
 }
 
-/** One query for a page of sites, its total, zone counts and engineers (no per-row queries). */
-export async function listSites(db: Knex, scope: SiteScope, filters: SiteListFilters) {
-  const rows = (await db('sites as s')
-    .leftJoin('organisations as mc', 'mc.id', 's.monitoring_centre_id')
+function filteredSites(db: Knex, scope: SiteScope, filters: SiteListFilters) {
+  return db('sites as s')
     .where((q) => {
-      q.whereIn('s.installer_id', scope.installerIds).orWhereIn(
-        's.monitoring_centre_id',
-        scope.monitoringCentreIds,
-      );
+      // Only the non-empty side of the scope, so a single installer's list can walk its index.
+      if (scope.installerIds.length) q.orWhereIn('s.installer_id', scope.installerIds);
+      if (scope.monitoringCentreIds.length)
+        q.orWhereIn('s.monitoring_centre_id', scope.monitoringCentreIds);
+      if (!scope.installerIds.length && !scope.monitoringCentreIds.length) q.whereRaw('false');
     })
     .modify((q) => {
       if (filters.q) q.where('s.search_text', 'like', likePattern(filters.q));
@@ -153,32 +151,50 @@ export async function listSites(db: Knex, scope: SiteScope, filters: SiteListFil
             .where('fe.user_id', filters.engineerId),
         );
       }
-    })
+    });
+}
+
+/**
+ * A page of sites in two queries, whatever the page size: the page itself (sorted and limited
+ * on bare site rows, then given zone counts and engineers for those rows only) and the total.
+ */
+export async function listSites(db: Knex, scope: SiteScope, filters: SiteListFilters) {
+  const page = filteredSites(db, scope, filters)
     .orderBy(SORT_COLUMNS[filters.sort], filters.order)
     .orderBy('s.id', 'asc')
     .limit(filters.pageSize)
     .offset((filters.page - 1) * filters.pageSize)
-    .select(
-      's.id',
-      's.reference',
-      's.name',
-      's.town',
-      's.postcode',
-      's.premises_type',
-      's.required_grade',
-      's.urn_status',
-      's.updated_at',
-      'mc.id as monitoring_centre_id',
-      'mc.name as monitoring_centre_name',
-      db.raw(
-        `(select count(*)::int from zones z join systems sy on sy.id = z.system_id where sy.site_id = s.id) as zone_count`,
-      ),
-      db.raw(
-        `coalesce((select json_agg(json_build_object('id', u.id, 'displayName', u.display_name) order by u.display_name)
-           from site_engineers se join users u on u.id = se.user_id where se.site_id = s.id), '[]'::json) as engineers`,
-      ),
-      db.raw('count(*) over ()::int as total'),
-    )) as SiteListRow[];
+    .select('s.*');
+
+  const [rows, counted] = await Promise.all([
+    db
+      .with('page', page)
+      .from('page as s')
+      .leftJoin('organisations as mc', 'mc.id', 's.monitoring_centre_id')
+      .orderBy(SORT_COLUMNS[filters.sort], filters.order)
+      .orderBy('s.id', 'asc')
+      .select(
+        's.id',
+        's.reference',
+        's.name',
+        's.town',
+        's.postcode',
+        's.premises_type',
+        's.required_grade',
+        's.urn_status',
+        's.updated_at',
+        'mc.id as monitoring_centre_id',
+        'mc.name as monitoring_centre_name',
+        db.raw(
+          `(select count(*)::int from zones z join systems sy on sy.id = z.system_id where sy.site_id = s.id) as zone_count`,
+        ),
+        db.raw(
+          `coalesce((select json_agg(json_build_object('id', u.id, 'displayName', u.display_name) order by u.display_name)
+             from site_engineers se join users u on u.id = se.user_id where se.site_id = s.id), '[]'::json) as engineers`,
+        ),
+      ) as Promise<SiteListRow[]>,
+    filteredSites(db, scope, filters).count<{ count: number }[]>('* as count'),
+  ]);
 
   const items: SiteListItem[] = rows.map((row) => ({
     id: row.id,
@@ -196,12 +212,7 @@ export async function listSites(db: Knex, scope: SiteScope, filters: SiteListFil
     engineers: row.engineers,
     updatedAt: row.updated_at.toISOString(),
   }));
-  // A page past the end has no rows to carry the total; count separately only then.
-  let total = rows[0]?.total ?? 0;
-  if (rows.length === 0 && filters.page > 1) {
-    total = (await listSites(db, scope, { ...filters, page: 1 })).total;
-  }
-  return { items, total: Number(total) };
+  return { items, total: Number(counted[0]?.count ?? 0) };
 }
 
 /** Everything the workspace header and overview need, in one query. */

@@ -23,57 +23,45 @@ interface UserRow {
   disabled_at: Date | null;
 }
 
-interface MembershipRow {
-  user_id: string;
-  role: Role;
-  organisation_id: string | null;
-  organisation_name: string | null;
-  organisation_kind: OrganisationKind | null;
+/** A user and their memberships in one query; every request that has a session makes it. */
+function userWithMemberships(db: Knex) {
+  return db('users as u').select(
+    'u.id',
+    'u.idp_subject',
+    'u.email',
+    'u.display_name',
+    'u.disabled_at',
+    db.raw(`coalesce((
+      select json_agg(json_build_object(
+               'role', m.role,
+               'organisation', case when o.id is null then null
+                 else json_build_object('id', o.id, 'name', o.name, 'kind', o.kind) end)
+             order by m.created_at, m.role)
+        from memberships m left join organisations o on o.id = m.organisation_id
+       where m.user_id = u.id), '[]'::json) as memberships`),
+  );
 }
 
-function membershipsQuery(db: Knex, userIds: string[]) {
-  return db('memberships as m')
-    .leftJoin('organisations as o', 'o.id', 'm.organisation_id')
-    .whereIn('m.user_id', userIds)
-    .orderBy([{ column: 'm.created_at' }, { column: 'm.role' }])
-    .select<MembershipRow[]>(
-      'm.user_id',
-      'm.role',
-      'm.organisation_id',
-      'o.name as organisation_name',
-      'o.kind as organisation_kind',
-    );
-}
-
-function toMembership(row: MembershipRow): Membership {
+function toUser(
+  row: (UserRow & { memberships: Membership[] }) | undefined,
+): UserWithMemberships | undefined {
+  if (!row) return undefined;
   return {
-    role: row.role,
-    organisation:
-      row.organisation_id && row.organisation_name && row.organisation_kind
-        ? { id: row.organisation_id, name: row.organisation_name, kind: row.organisation_kind }
-        : null,
+    id: row.id,
+    idpSubject: row.idp_subject,
+    email: row.email,
+    displayName: row.display_name,
+    disabled: row.disabled_at !== null,
+    memberships: row.memberships,
   };
 }
 
-async function withMemberships(db: Knex, user: UserRow | undefined) {
-  if (!user) return undefined;
-  const memberships = await membershipsQuery(db, [user.id]);
-  return {
-    id: user.id,
-    idpSubject: user.idp_subject,
-    email: user.email,
-    displayName: user.display_name,
-    disabled: user.disabled_at !== null,
-    memberships: memberships.map(toMembership),
-  } satisfies UserWithMemberships;
-}
-
 export async function findUserById(db: Knex, id: string) {
-  return withMemberships(db, await db<UserRow>('users').where({ id }).first());
+  return toUser(await userWithMemberships(db).where('u.id', id).first());
 }
 
 export async function findUserBySubject(db: Knex, idpSubject: string) {
-  return withMemberships(db, await db<UserRow>('users').where({ idp_subject: idpSubject }).first());
+  return toUser(await userWithMemberships(db).where('u.idp_subject', idpSubject).first());
 }
 
 /** Keeps the name and e-mail the IdP vouches for in step with Wardbook's copy. */
