@@ -98,11 +98,14 @@ const HAZARDS = [
   'Building refurbished in 1978: ask before drilling (possible asbestos in the garage ceiling).',
   'Lone attendance discouraged: isolated rural site with poor phone signal.',
 ];
-const ACCESS = [
-  'Key safe by the side gate; the code is held by the monitoring centre.',
+const DOMESTIC_ACCESS = [
+  'Key safe by the side gate; the monitoring centre gives its combination to attending keyholders.',
   'Front door key with keyholders only. Panel in the cupboard under the stairs.',
+  'Side gate is bolted from inside; use the front door. Panel in the garage behind the freezer.',
+];
+const COMMERCIAL_ACCESS = [
   'Enter through the rear staff door. Panel in the stockroom, high on the left wall.',
-  'Gate code from the homeowner. Panel in the garage behind the freezer.',
+  'Roller shutter key with keyholders. Panel in the office behind the counter.',
 ];
 
 const UNIT_LETTERS = 'ABDEFGHJLNPQRSTUWXYZ';
@@ -127,7 +130,7 @@ export function demoSitePlans(count = 25): DemoSitePlan[] {
       zones,
       monitored: commercial || grade >= 3 || random.next() < 0.5,
       hazards: random.pick(HAZARDS),
-      accessNotes: random.pick(ACCESS),
+      accessNotes: random.pick(commercial ? COMMERCIAL_ACCESS : DOMESTIC_ACCESS),
     });
   }
   // The first site is the demo homeowner's own home, kept recognisable in the walkthrough.

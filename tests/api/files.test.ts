@@ -55,7 +55,9 @@ describe('uploading and downloading site files', () => {
       });
     expect(downloaded.status).toBe(200);
     expect(downloaded.headers['content-type']).toBe('image/png');
-    expect(downloaded.headers['content-disposition']).toMatch(/^attachment; filename="?panel\.png"?$/);
+    expect(downloaded.headers['content-disposition']).toMatch(
+      /^attachment; filename="?panel\.png"?$/,
+    );
     expect(downloaded.headers['x-content-type-options']).toBe('nosniff');
     expect(sha256(downloaded.body as Buffer)).toBe(sha256(DEMO_PHOTO));
     const inline = await agent.get(

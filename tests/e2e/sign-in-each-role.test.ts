@@ -1,13 +1,16 @@
 import type { Page } from 'playwright-core';
-import { describe, expect, inject, it } from 'vitest';
-import { totpCode } from '../../idp/totp';
+import { afterAll, describe, expect, inject, it } from 'vitest';
 import { ROLES, type Role } from '../../server/users/roles';
 import { DEMO_ACCOUNTS, DEMO_PASSWORD } from '../../seeds/data/demo-scenario';
+import { unusedTotpCode } from '../setup/browser-sign-in';
+import { closeTestDb, testDb } from '../setup/database';
 import { useChromium } from '../setup/use-chromium';
 import '../setup/provided';
 
 const { apiUrl, idpUrl } = inject('stack');
 const browser = useChromium();
+const db = testDb();
+afterAll(closeTestDb);
 
 const HOME_HEADINGS: Record<Role, string> = {
   engineer: 'Engineer home',
@@ -40,7 +43,9 @@ async function signInThroughLoginPage(page: Page, role: Role) {
   await page.getByRole('button', { name: 'Sign in' }).click();
 
   if (account.totpSecret) {
-    await page.getByLabel('One-time code').fill(totpCode(account.totpSecret));
+    await page
+      .getByLabel('One-time code')
+      .fill(await unusedTotpCode(db, account.email, account.totpSecret));
     await page.getByRole('button', { name: 'Continue' }).click();
   }
   await page.waitForURL(`${apiUrl}/${role}**`);
