@@ -49,7 +49,7 @@ export function createPasswordRouter(deps: PasswordRouterDeps): Router {
   const expired = messagePage({
     title: 'This link no longer works',
     message:
-      'Password links work once and for 30 minutes. Ask for a new one and use the newest e-mail.',
+      'Password links work once, and only for a while: 30 minutes after a reset request, 7 days after an invitation. Ask for a new one and use the newest e-mail.',
     link: { href: '/password/forgot', text: 'Send a new link' },
   });
 
