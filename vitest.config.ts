@@ -1,4 +1,11 @@
+import { fileURLToPath, URL } from 'node:url';
 import { defineConfig } from 'vitest/config';
+
+// The client's pure helpers are unit-tested too, so the unit project resolves its aliases.
+const alias = {
+  '@': fileURLToPath(new URL('./src', import.meta.url)),
+  '@server': fileURLToPath(new URL('./server', import.meta.url)),
+};
 
 // Three projects: pure unit tests, API tests against a real PostgreSQL, and browser tests
 // driving Debian's Chromium through the real sign-in pages.
@@ -6,6 +13,7 @@ export default defineConfig({
   test: {
     projects: [
       {
+        resolve: { alias },
         test: {
           name: 'unit',
           include: ['tests/unit/**/*.test.ts', 'server/**/*.test.ts', 'idp/**/*.test.ts'],

@@ -68,8 +68,8 @@ const TOWNS = [
   { town: 'Little Haldon', district: 'EM7' },
   { town: 'Fernmoor', district: 'EM9' },
 ];
+// 'Marsh' is kept for the demo homeowner's own home, the first site.
 const SURNAMES = [
-  'Marsh',
   'Okonjo',
   'Pelham',
   'Rowntree',
@@ -79,6 +79,22 @@ const SURNAMES = [
   'Lindqvist',
   'Brannigan',
   'Osei',
+  'Ferreira',
+  'Halloran',
+  'Nakamura',
+  'Szabo',
+  'Ellery',
+  'Mbeki',
+  'Tremayne',
+  'Kowalczyk',
+  'Aldous',
+  'Penhallow',
+  'Iqbal',
+  'Danvers',
+  'Oyelaran',
+  'Fairweather',
+  'Castellano',
+  'Moreland',
 ];
 const BUSINESSES = [
   'Eastmere Pharmacy',

@@ -71,7 +71,7 @@ const POSTCODE = /^(GIR ?0AA|[A-PR-UWYZ][A-HK-Y]?\d[A-Z\d]? ?\d[ABD-HJLNP-UW-Z]{
 export const postcodeSchema = z
   .string()
   .trim()
-  .refine((value) => POSTCODE.test(value), 'Enter a UK postcode such as AB1 2CD.')
+  .refine((value) => POSTCODE.test(value), 'Enter a UK postcode such as AB1 2DE.')
   .transform((value) => {
     const compact = value.replace(/\s+/g, '').toUpperCase();
     return `${compact.slice(0, -3)} ${compact.slice(-3)}`;

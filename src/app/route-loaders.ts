@@ -79,3 +79,14 @@ export const roleHomeLoader =
     });
     return null;
   };
+
+/** Any page of a role: signed in and holding that role (403 inside the role's frame if not). */
+export const roleLoader =
+  (queryClient: QueryClient, role: Role) =>
+  async ({ request }: LoaderFunctionArgs) => {
+    const me = requireSignedIn(await queryClient.ensureQueryData(getMeQueryOptions()), request);
+    if (!hasRole(me, role)) {
+      throw data({ roleLabel: roleLabels[role] }, { status: 403, statusText: 'Forbidden' });
+    }
+    return null;
+  };

@@ -1,8 +1,19 @@
 import { useMemo, type ComponentType } from 'react';
 import { useQueryClient, type QueryClient } from '@tanstack/react-query';
-import { createBrowserRouter, RouterProvider, type RouteObject } from 'react-router-dom';
+import {
+  createBrowserRouter,
+  RouterProvider,
+  type LoaderFunction,
+  type RouteObject,
+} from 'react-router-dom';
 
-import { appEntryLoader, landingLoader, roleHomeLoader, signedInLoader } from '@/app/route-loaders';
+import {
+  appEntryLoader,
+  landingLoader,
+  roleHomeLoader,
+  roleLoader,
+  signedInLoader,
+} from '@/app/route-loaders';
 import { RoleRouteErrorRoute } from '@/app/routes/app/role-route-error';
 import { RootRoute } from '@/app/routes/root';
 import { RouteErrorPage } from '@/components/errors/route-error-page';
@@ -24,14 +35,126 @@ function rolesWithLayout(layout: RoleLayout): Role[] {
   return roleSchema.options.filter((role) => roleLayouts[role] === layout);
 }
 
-function roleHomeRoute(queryClient: QueryClient, role: Role): RouteObject {
+/**
+ * A screen module exports `Component` and, when it needs data first, `createLoader(queryClient)`;
+ * both arrive together when the route is first visited.
+ */
+type ScreenModule = {
+  Component: ComponentType;
+  createLoader?: (queryClient: QueryClient) => LoaderFunction;
+};
+
+function screen(queryClient: QueryClient, load: () => Promise<ScreenModule>): RouteObject['lazy'] {
+  return async () => {
+    const module = await load();
+    return {
+      Component: module.Component,
+      ...(module.createLoader ? { loader: module.createLoader(queryClient) } : {}),
+    };
+  };
+}
+
+// The installer's site record: list, create, and a workspace with one section per child route.
+function siteRoutes(queryClient: QueryClient): RouteObject[] {
+  return [
+    {
+      path: paths.sites.list.path,
+      lazy: screen(queryClient, () => import('@/app/routes/app/sites/sites-list')),
+    },
+    {
+      path: paths.sites.create.path,
+      lazy: screen(queryClient, () => import('@/app/routes/app/sites/site-create')),
+    },
+    {
+      path: paths.sites.workspace.path,
+      lazy: screen(queryClient, () => import('@/app/routes/app/sites/site-workspace')),
+      children: [
+        {
+          index: true,
+          lazy: screen(queryClient, () => import('@/app/routes/app/sites/site-overview')),
+        },
+        {
+          path: 'system',
+          lazy: screen(queryClient, () => import('@/app/routes/app/sites/site-system')),
+        },
+        {
+          path: 'zones',
+          lazy: screen(queryClient, () => import('@/app/routes/app/sites/site-zones')),
+        },
+        {
+          path: 'devices',
+          lazy: screen(queryClient, () => import('@/app/routes/app/sites/site-devices')),
+        },
+        {
+          path: 'people',
+          lazy: screen(queryClient, () => import('@/app/routes/app/sites/site-people')),
+        },
+        {
+          path: 'files',
+          lazy: screen(queryClient, () => import('@/app/routes/app/sites/site-files')),
+        },
+      ],
+    },
+  ];
+}
+
+// A homeowner's own site: an overview and one page per section, each phone-first.
+function myHomeRoutes(queryClient: QueryClient): RouteObject[] {
+  return [
+    {
+      path: paths.myHome.path,
+      lazy: screen(queryClient, () => import('@/app/routes/app/homes/my-home')),
+      children: [
+        {
+          index: true,
+          lazy: screen(queryClient, () => import('@/app/routes/app/homes/my-home-overview')),
+        },
+        {
+          path: 'zones',
+          lazy: screen(queryClient, () => import('@/app/routes/app/homes/my-home-zones')),
+        },
+        {
+          path: 'keyholders',
+          lazy: screen(queryClient, () => import('@/app/routes/app/homes/my-home-keyholders')),
+        },
+        {
+          path: 'user-codes',
+          lazy: screen(queryClient, () => import('@/app/routes/app/homes/my-home-user-codes')),
+        },
+        {
+          path: 'files',
+          lazy: screen(queryClient, () => import('@/app/routes/app/homes/my-home-files')),
+        },
+        {
+          path: 'request',
+          lazy: screen(queryClient, () => import('@/app/routes/app/homes/my-home-request')),
+        },
+      ],
+    },
+  ];
+}
+
+const roleSubRoutes: Partial<Record<Role, (queryClient: QueryClient) => RouteObject[]>> = {
+  engineer: siteRoutes,
+  office: siteRoutes,
+  homeowner: myHomeRoutes,
+};
+
+function roleRoute(queryClient: QueryClient, role: Role): RouteObject {
   return {
     path: paths.home[role].path,
     handle: { role } satisfies RoleRouteHandle,
-    loader: roleHomeLoader(queryClient, role),
+    loader: roleLoader(queryClient, role),
     // Static rather than lazy, so a refusal renders even if the screen's code fails to load.
     ErrorBoundary: RoleRouteErrorRoute,
-    lazy: async () => ({ Component: await roleHomeScreens[role]() }),
+    children: [
+      {
+        index: true,
+        loader: roleHomeLoader(queryClient, role),
+        lazy: async () => ({ Component: await roleHomeScreens[role]() }),
+      },
+      ...(roleSubRoutes[role]?.(queryClient) ?? []),
+    ],
   };
 }
 
@@ -69,7 +192,7 @@ function createAppRouter(queryClient: QueryClient) {
           lazy: async () => ({
             Component: (await import('@/app/routes/app/workspace-layout')).WorkspaceLayoutRoute,
           }),
-          children: rolesWithLayout('workspace').map((role) => roleHomeRoute(queryClient, role)),
+          children: rolesWithLayout('workspace').map((role) => roleRoute(queryClient, role)),
         },
         {
           // Personal roles (homeowner, keyholder): phone-first frame.
@@ -77,7 +200,7 @@ function createAppRouter(queryClient: QueryClient) {
           lazy: async () => ({
             Component: (await import('@/app/routes/app/personal-layout')).PersonalLayoutRoute,
           }),
-          children: rolesWithLayout('personal').map((role) => roleHomeRoute(queryClient, role)),
+          children: rolesWithLayout('personal').map((role) => roleRoute(queryClient, role)),
         },
         {
           path: '*',

@@ -1,5 +1,12 @@
 import type { Role } from '@/types/api';
 
+/** Roles that work on the installer's site records. */
+export type SiteRole = 'engineer' | 'office';
+export const SITE_SECTIONS = ['system', 'zones', 'devices', 'people', 'files'] as const;
+export type SiteSection = (typeof SITE_SECTIONS)[number];
+export const MY_HOME_SECTIONS = ['zones', 'keyholders', 'user-codes', 'files', 'request'] as const;
+export type MyHomeSection = (typeof MY_HOME_SECTIONS)[number];
+
 function withQuery(path: string, query: Record<string, string | undefined>): string {
   const search = new URLSearchParams();
   for (const [name, value] of Object.entries(query)) {
@@ -23,6 +30,22 @@ export const paths = {
     operator: { path: '/operator', getHref: () => '/operator' },
     homeowner: { path: '/homeowner', getHref: () => '/homeowner' },
     keyholder: { path: '/keyholder', getHref: () => '/keyholder' },
+  },
+  // Engineers and office staff work on the same site pages under their own role's prefix.
+  sites: {
+    list: { path: 'sites', getHref: (role: SiteRole) => `/${role}/sites` },
+    create: { path: 'sites/new', getHref: (role: SiteRole) => `/${role}/sites/new` },
+    workspace: {
+      path: 'sites/:siteId',
+      getHref: (role: SiteRole, siteId: string, section?: SiteSection) =>
+        `/${role}/sites/${encodeURIComponent(siteId)}${section ? `/${section}` : ''}`,
+    },
+  },
+  // A homeowner's own site, phone-first.
+  myHome: {
+    path: 'homes/:siteId',
+    getHref: (siteId: string, section?: MyHomeSection) =>
+      `/homeowner/homes/${encodeURIComponent(siteId)}${section ? `/${section}` : ''}`,
   },
   // Served by the API, not the client router: always reached by a full-page navigation.
   auth: {

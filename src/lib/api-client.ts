@@ -82,14 +82,15 @@ async function readJsonBody(response: Response): Promise<unknown> {
   }
 }
 
+/** The error for a reply that was not OK, from its problem+json body when it has one. */
+function errorFromProblemBody(status: number, payload: unknown): ApiError {
+  const parsed = problemSchema.safeParse(payload);
+  if (parsed.success) return new ApiError({ ...parsed.data, status });
+  return new ApiError({ type: 'about:blank', title: fallbackTitle(status), status });
+}
+
 async function errorFromResponse(response: Response): Promise<ApiError> {
-  const parsed = problemSchema.safeParse(await readJsonBody(response));
-  if (parsed.success) return new ApiError({ ...parsed.data, status: response.status });
-  return new ApiError({
-    type: 'about:blank',
-    title: fallbackTitle(response.status),
-    status: response.status,
-  });
+  return errorFromProblemBody(response.status, await readJsonBody(response));
 }
 
 function unexpectedReply(status: number, url: string, issues?: unknown): ApiError {
@@ -115,6 +116,11 @@ export function setCsrfToken(token: string): void {
 
 export function clearCsrfToken(): void {
   csrfToken = null;
+}
+
+/** For requests this module does not send itself, such as uploads that report progress. */
+export function getCsrfToken(): string | null {
+  return csrfToken;
 }
 
 type HttpMethod = 'GET' | 'POST' | 'PUT' | 'PATCH' | 'DELETE';
@@ -163,6 +169,9 @@ export async function apiRequest<Schema extends z.ZodType>(
   return parsed.data;
 }
 
+/** What a 204 No Content reply parses to. */
+export const noContentSchema = z.undefined();
+
 export const api = {
   get: <Schema extends z.ZodType>(
     url: string,
@@ -171,4 +180,69 @@ export const api = {
   ) => apiRequest(url, { schema, signal: options?.signal }),
   post: <Schema extends z.ZodType>(url: string, body: unknown, schema: Schema) =>
     apiRequest(url, { method: 'POST', body, schema }),
+  put: <Schema extends z.ZodType>(url: string, body: unknown, schema: Schema) =>
+    apiRequest(url, { method: 'PUT', body, schema }),
+  patch: <Schema extends z.ZodType>(url: string, body: unknown, schema: Schema) =>
+    apiRequest(url, { method: 'PATCH', body, schema }),
+  delete: (url: string) => apiRequest(url, { method: 'DELETE', schema: noContentSchema }),
 };
+
+export type UploadProgress = { loadedBytes: number; totalBytes: number };
+
+type UploadOptions<Schema extends z.ZodType> = {
+  body: FormData;
+  schema: Schema;
+  onProgress?: (progress: UploadProgress) => void;
+  signal?: AbortSignal;
+};
+
+/**
+ * Sends a multipart form with XMLHttpRequest, because fetch cannot report how much of the request
+ * body has gone. Errors are the same ApiError and NetworkError as for every other request.
+ */
+export function apiUpload<Schema extends z.ZodType>(
+  url: string,
+  { body, schema, onProgress, signal }: UploadOptions<Schema>,
+): Promise<z.output<Schema>> {
+  return new Promise((resolve, reject) => {
+    const request = new XMLHttpRequest();
+    request.open('POST', url);
+    request.withCredentials = true;
+    request.responseType = 'text';
+    request.setRequestHeader('Accept', 'application/json, application/problem+json');
+    if (csrfToken) request.setRequestHeader('x-csrf-token', csrfToken);
+
+    request.upload.onprogress = (event) => {
+      if (event.lengthComputable) {
+        onProgress?.({ loadedBytes: event.loaded, totalBytes: event.total });
+      }
+    };
+    request.onerror = () => reject(new NetworkError(new Error('The upload was interrupted.')));
+    request.onabort = () => reject(new DOMException('The upload was cancelled.', 'AbortError'));
+    request.onload = () => {
+      const contentType = request.getResponseHeader('content-type') ?? '';
+      let payload: unknown;
+      if (/\bjson\b/i.test(contentType)) {
+        try {
+          payload = JSON.parse(request.responseText);
+        } catch {
+          payload = undefined;
+        }
+      }
+      if (request.status < 200 || request.status >= 300) {
+        reject(errorFromProblemBody(request.status, payload));
+        return;
+      }
+      const parsed = schema.safeParse(payload);
+      if (parsed.success) resolve(parsed.data);
+      else reject(unexpectedReply(request.status, url, parsed.error.issues));
+    };
+
+    if (signal?.aborted) {
+      reject(new DOMException('The upload was cancelled.', 'AbortError'));
+      return;
+    }
+    signal?.addEventListener('abort', () => request.abort(), { once: true });
+    request.send(body);
+  });
+}

@@ -1,27 +1,19 @@
 import type { Knex } from 'knex';
 import request from 'supertest';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { beforeAll, describe, expect, it } from 'vitest';
 import { ROLES, type Role } from '../../server/users/roles';
-import { buildApiHarness } from '../setup/api-app';
-import { closeTestDb, testDb } from '../setup/database';
 import { listRoutes } from '../setup/routes';
 import { createPerson } from '../setup/factories';
-import { createSiteWorld, type SiteFixture, type SiteWorld } from '../setup/site-fixtures';
+import { useSiteWorld, type SiteFixture, type SiteWorld } from '../setup/site-fixtures';
 
 /**
  * Every route of the API, every role, against a record of their own and one of someone else's.
  * A route missing from MATRIX fails the first test: new routes cannot slip in unguarded.
  */
-const db = testDb();
-const harness = await buildApiHarness(db);
+const { harness, db, world: currentWorld } = await useSiteWorld();
 let world: SiteWorld;
-
-beforeAll(async () => {
-  world = await createSiteWorld(db);
-});
-afterAll(async () => {
-  await harness.close();
-  await closeTestDb();
+beforeAll(() => {
+  world = currentWorld();
 });
 
 type Target = 'own' | 'other';

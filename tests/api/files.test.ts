@@ -1,21 +1,13 @@
 import { createHash } from 'node:crypto';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { beforeAll, describe, expect, it } from 'vitest';
 import { sanitiseFileName } from '../../server/files/file-names';
 import { demoPdf, DEMO_PHOTO } from '../../seeds/data/demo-sites';
-import { buildApiHarness } from '../setup/api-app';
-import { closeTestDb, testDb } from '../setup/database';
-import { createSiteWorld, type SiteWorld } from '../setup/site-fixtures';
+import { useSiteWorld, type SiteWorld } from '../setup/site-fixtures';
 
-const db = testDb();
-const harness = await buildApiHarness(db);
+const { harness, db, world: currentWorld } = await useSiteWorld();
 let world: SiteWorld;
-
-beforeAll(async () => {
-  world = await createSiteWorld(db);
-});
-afterAll(async () => {
-  await harness.close();
-  await closeTestDb();
+beforeAll(() => {
+  world = currentWorld();
 });
 
 const filesOf = (siteId: string) => `/api/sites/${siteId}/files`;

@@ -1,19 +1,11 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { buildApiHarness } from '../setup/api-app';
-import { closeTestDb, testDb } from '../setup/database';
+import { beforeAll, describe, expect, it } from 'vitest';
 import { createPerson } from '../setup/factories';
-import { createSiteWorld, type SiteWorld } from '../setup/site-fixtures';
+import { useSiteWorld, type SiteWorld } from '../setup/site-fixtures';
 
-const db = testDb();
-const harness = await buildApiHarness(db);
+const { harness, db, world: currentWorld } = await useSiteWorld();
 let world: SiteWorld;
-
-beforeAll(async () => {
-  world = await createSiteWorld(db);
-});
-afterAll(async () => {
-  await harness.close();
-  await closeTestDb();
+beforeAll(() => {
+  world = currentWorld();
 });
 
 const asHomeowner = () => harness.signedInAs(world.homeowner.userId);

@@ -102,7 +102,7 @@ describe('creating a site', () => {
     );
     expect(
       response.body.errors.find((e: { path: string }) => e.path === 'body.postcode').message,
-    ).toBe('Enter a UK postcode such as AB1 2CD.');
+    ).toBe('Enter a UK postcode such as AB1 2DE.');
     expect(await db('sites').count('* as n').first()).toEqual(before);
   });
 

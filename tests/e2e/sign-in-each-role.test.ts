@@ -1,8 +1,7 @@
 import type { Page } from 'playwright-core';
 import { afterAll, describe, expect, inject, it } from 'vitest';
 import { ROLES, type Role } from '../../server/users/roles';
-import { DEMO_ACCOUNTS, DEMO_PASSWORD } from '../../seeds/data/demo-scenario';
-import { unusedTotpCode } from '../setup/browser-sign-in';
+import { signInAs } from '../setup/browser-sign-in';
 import { closeTestDb, testDb } from '../setup/database';
 import { useChromium } from '../setup/use-chromium';
 import '../setup/provided';
@@ -29,27 +28,10 @@ const VIEWPORTS: Record<Role, { width: number; height: number }> = {
   keyholder: { width: 390, height: 844 },
 };
 
-async function signInThroughLoginPage(page: Page, role: Role) {
-  const account = DEMO_ACCOUNTS.find((a) => a.role === role)!;
-  await page.goto(`${apiUrl}/`);
-  await page.getByRole('link', { name: 'Sign in' }).first().click();
-
-  await page.waitForURL(`${idpUrl}/interaction/**`);
-  await expect
-    .poll(() => page.getByRole('heading', { level: 1 }).textContent())
-    .toBe('Sign in to Wardbook');
-  await page.getByLabel('E-mail address').fill(account.email);
-  await page.getByLabel('Password').fill(DEMO_PASSWORD);
-  await page.getByRole('button', { name: 'Sign in' }).click();
-
-  if (account.totpSecret) {
-    await page
-      .getByLabel('One-time code')
-      .fill(await unusedTotpCode(db, account.email, account.totpSecret));
-    await page.getByRole('button', { name: 'Continue' }).click();
-  }
+const signInThroughLoginPage = async (page: Page, role: Role) => {
+  await signInAs(page, db, role, { fromLandingPage: true });
   await page.waitForURL(`${apiUrl}/${role}**`);
-}
+};
 
 describe('signing in through the real login page', () => {
   it.each(ROLES)(

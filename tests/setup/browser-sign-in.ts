@@ -30,14 +30,29 @@ export async function unusedTotpCode(db: Knex, email: string, secret: string): P
   }
 }
 
-/** Signs a demo account in through the real login page (and its one-time code, for staff). */
-export async function signInAs(page: Page, db: Knex, role: Role, returnTo?: string) {
+/**
+ * Signs a demo account in through the real login page (and its one-time code, for staff),
+ * starting from the landing page's "Sign in" link or straight from /auth/login.
+ */
+export async function signInAs(
+  page: Page,
+  db: Knex,
+  role: Role,
+  options: { fromLandingPage?: boolean; returnTo?: string } = {},
+) {
   const { apiUrl, idpUrl } = inject('stack');
   const account = DEMO_ACCOUNTS.find((candidate) => candidate.role === role)!;
-  await page.goto(
-    `${apiUrl}/auth/login${returnTo ? `?returnTo=${encodeURIComponent(returnTo)}` : ''}`,
-  );
+  if (options.fromLandingPage) {
+    await page.goto(`${apiUrl}/`);
+    await page.getByRole('link', { name: 'Sign in' }).first().click();
+  } else {
+    const returnTo = options.returnTo ? `?returnTo=${encodeURIComponent(options.returnTo)}` : '';
+    await page.goto(`${apiUrl}/auth/login${returnTo}`);
+  }
   await page.waitForURL(`${idpUrl}/interaction/**`);
+  await expect
+    .poll(() => page.getByRole('heading', { level: 1 }).textContent())
+    .toBe('Sign in to Wardbook');
   await page.getByLabel('E-mail address').fill(account.email);
   await page.getByLabel('Password').fill(DEMO_PASSWORD);
   await page.getByRole('button', { name: 'Sign in' }).click();

@@ -1,5 +1,8 @@
 import { randomBytes } from 'node:crypto';
 import type { Knex } from 'knex';
+import { afterAll, beforeAll } from 'vitest';
+import { buildApiHarness, type ApiHarness } from './api-app';
+import { closeTestDb, testDb } from './database';
 import { createOrganisation, createPerson, type TestPerson } from './factories';
 
 const tag = () => randomBytes(3).toString('hex');
@@ -138,5 +141,34 @@ export async function createSiteWorld(db: Knex): Promise<SiteWorld> {
     own,
     other,
     otherHomeowner,
+  };
+}
+
+/**
+ * The usual set-up of an API test about site records: the app harness and a fresh world,
+ * torn down after the file. Read both through the returned getters inside tests.
+ */
+export async function useSiteWorld(): Promise<{
+  harness: ApiHarness;
+  db: Knex;
+  world: () => SiteWorld;
+}> {
+  const db = testDb();
+  const harness = await buildApiHarness(db);
+  let world: SiteWorld | undefined;
+  beforeAll(async () => {
+    world = await createSiteWorld(db);
+  });
+  afterAll(async () => {
+    await harness.close();
+    await closeTestDb();
+  });
+  return {
+    harness,
+    db,
+    world: () => {
+      if (!world) throw new Error('the site world is made in beforeAll');
+      return world;
+    },
   };
 }

@@ -42,7 +42,7 @@ export function PhoneLayout({
             <li key={item.href}>
               <NavLink
                 to={item.href}
-                end
+                end={item.exact ?? true}
                 className={({ isActive }) =>
                   cn(
                     'flex min-h-12 items-center gap-2 border-b-4 px-2 text-base font-medium no-underline',

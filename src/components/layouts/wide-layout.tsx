@@ -40,7 +40,7 @@ export function WideLayout({ homeHref, account, context, navigation, children }:
               <li key={item.href}>
                 <NavLink
                   to={item.href}
-                  end
+                  end={item.exact ?? true}
                   className={({ isActive }) =>
                     cn(
                       'flex min-h-10 items-center gap-3 rounded-md border-l-4 px-3 text-sm font-medium no-underline',

@@ -1,7 +1,8 @@
 import { Suspense } from 'react';
-import { House } from 'lucide-react';
+import { Building2, House } from 'lucide-react';
 import { Outlet } from 'react-router-dom';
 
+import type { NavigationItem } from '@/components/layouts/navigation';
 import { PublicLayout } from '@/components/layouts/public-layout';
 import { WideLayout } from '@/components/layouts/wide-layout';
 import { LoadingStatus } from '@/components/ui/loading-status';
@@ -28,6 +29,16 @@ export function WorkspaceLayoutRoute() {
   // On a refusal page the role in view is one the person lacks: show none rather than imply it.
   const current = roleEntries(me.roles).find((entry) => entry.role === roleInView);
   const homeHref = current ? roleHomeHref(current.role) : paths.app.getHref();
+  const navigation: NavigationItem[] = [{ label: 'Home', href: homeHref, icon: House }];
+  // Engineers and office staff keep the company's site records.
+  if (current?.role === 'engineer' || current?.role === 'office') {
+    navigation.push({
+      label: 'Sites',
+      href: paths.sites.list.getHref(current.role),
+      icon: Building2,
+      exact: false,
+    });
+  }
 
   return (
     <WideLayout
@@ -43,7 +54,7 @@ export function WorkspaceLayoutRoute() {
           </>
         ) : null
       }
-      navigation={[{ label: 'Home', href: homeHref, icon: House }]}
+      navigation={navigation}
     >
       <Suspense fallback={<LoadingStatus label="Loading page" />}>
         <Outlet />

@@ -1,11 +1,15 @@
-import { Phone } from 'lucide-react';
+import type { ReactNode } from 'react';
 
-import { Card } from '@/components/ui/card';
+import { AlarmAttendanceSafetyCard } from '@/components/ui/alarm-attendance-safety-card';
 import { PageHeading } from '@/components/ui/page-heading';
 import { useRoleHome } from '@/features/homes/api/get-role-home';
-import { AlarmAttendanceSafetyCard } from '@/features/homes/components/alarm-attendance-safety-card';
 
-export function HomeownerHome() {
+type HomeownerHomeProps = {
+  /** The homeowner's homes, each with who to call; supplied by the route. */
+  children: ReactNode;
+};
+
+export function HomeownerHome({ children }: HomeownerHomeProps) {
   const { data: home } = useRoleHome('homeowner');
 
   return (
@@ -13,13 +17,8 @@ export function HomeownerHome() {
       <PageHeading title="My home">
         <p>Welcome, {home.displayName}.</p>
       </PageHeading>
-      <div className="grid gap-5">
-        <Card title="Who to call" icon={Phone}>
-          <p className="text-base">
-            Your alarm company&apos;s and monitoring centre&apos;s contact details will appear here
-            once your alarm system has been recorded in Wardbook.
-          </p>
-        </Card>
+      <div className="grid gap-8">
+        {children}
         <AlarmAttendanceSafetyCard />
       </div>
     </>

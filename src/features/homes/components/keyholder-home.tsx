@@ -1,11 +1,15 @@
-import { KeyRound } from 'lucide-react';
+import type { ReactNode } from 'react';
 
-import { Card } from '@/components/ui/card';
+import { AlarmAttendanceSafetyCard } from '@/components/ui/alarm-attendance-safety-card';
 import { PageHeading } from '@/components/ui/page-heading';
 import { useRoleHome } from '@/features/homes/api/get-role-home';
-import { AlarmAttendanceSafetyCard } from '@/features/homes/components/alarm-attendance-safety-card';
 
-export function KeyholderHome() {
+type KeyholderHomeProps = {
+  /** The sites this person holds keys for; supplied by the route. */
+  children: ReactNode;
+};
+
+export function KeyholderHome({ children }: KeyholderHomeProps) {
   const { data: home } = useRoleHome('keyholder');
 
   return (
@@ -13,14 +17,9 @@ export function KeyholderHome() {
       <PageHeading title="Keyholder home">
         <p>Welcome, {home.displayName}.</p>
       </PageHeading>
-      <div className="grid gap-5">
+      <div className="grid gap-6">
         <AlarmAttendanceSafetyCard prominent />
-        <Card title="Homes you hold keys for" icon={KeyRound}>
-          <p className="text-base">
-            When a homeowner names you as a keyholder, their access notes and call plan will appear
-            here, and you will be able to answer alerts with whether you can attend.
-          </p>
-        </Card>
+        {children}
       </div>
     </>
   );
