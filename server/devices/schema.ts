@@ -1,9 +1,8 @@
 import { z } from 'zod';
 import {
-  environmentalClassSchema,
-  gradeSchema,
+  fittedComponentFields,
+  fittedComponentRecordFields,
   idSchema,
-  milliampsSchema,
   trimmed,
   versionSchema,
 } from '../schema/fields';
@@ -35,11 +34,7 @@ export const deviceInputSchema = z
     kind: z.enum(DEVICE_KINDS, { error: 'Choose the kind of device.' }),
     location: trimmed(120, 'Location').min(1, 'Say where the device is, e.g. Hall by front door.'),
     model: trimmed(120, 'Model').default(''),
-    areaId: idSchema.nullable().default(null),
-    grade: gradeSchema.nullable().default(null),
-    environmentalClass: environmentalClassSchema.nullable().default(null),
-    quiescentMa: milliampsSchema.nullable().default(null),
-    alarmMa: milliampsSchema.nullable().default(null),
+    ...fittedComponentFields,
   })
   .strict();
 export type DeviceInput = z.input<typeof deviceInputSchema>;
@@ -58,11 +53,7 @@ export const deviceSchema = z.object({
   kind: z.enum(DEVICE_KINDS),
   location: z.string(),
   model: z.string(),
-  areaId: z.string().nullable(),
-  grade: z.number().nullable(),
-  environmentalClass: z.number().nullable(),
-  quiescentMa: z.number().nullable(),
-  alarmMa: z.number().nullable(),
+  ...fittedComponentRecordFields,
 });
 export type Device = z.infer<typeof deviceSchema>;
 

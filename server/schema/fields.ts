@@ -102,3 +102,23 @@ export function withoutDefaults<Shape extends z.ZodRawShape>(
     ]),
   ) as { [Key in keyof Shape]: WithoutDefault<Shape[Key]> };
 }
+
+/**
+ * Where a fitted component sits and what it is rated for, shared by zone detectors and devices:
+ * its area, EN 50131 grade and environmental class, and the currents the power budget sums.
+ */
+export const fittedComponentFields = {
+  areaId: idSchema.nullable().default(null),
+  grade: gradeSchema.nullable().default(null),
+  environmentalClass: environmentalClassSchema.nullable().default(null),
+  quiescentMa: milliampsSchema.nullable().default(null),
+  alarmMa: milliampsSchema.nullable().default(null),
+};
+
+export const fittedComponentRecordFields = {
+  areaId: z.string().nullable(),
+  grade: z.number().nullable(),
+  environmentalClass: z.number().nullable(),
+  quiescentMa: z.number().nullable(),
+  alarmMa: z.number().nullable(),
+};

@@ -1,9 +1,8 @@
 import { z } from 'zod';
 import {
-  environmentalClassSchema,
-  gradeSchema,
+  fittedComponentFields,
+  fittedComponentRecordFields,
   idSchema,
-  milliampsSchema,
   trimmed,
   versionSchema,
 } from '../schema/fields';
@@ -143,12 +142,8 @@ export const zoneInputSchema = z
     tamperOhms: resistorOhmsSchema.nullable().default(null),
     alarmOhms: resistorOhmsSchema.nullable().default(null),
     coreMap: z.array(coreConnectionSchema).max(12).default([]),
-    areaId: idSchema.nullable().default(null),
+    ...fittedComponentFields,
     attributes: z.array(z.enum(ZONE_ATTRIBUTES)).max(ZONE_ATTRIBUTES.length).default([]),
-    grade: gradeSchema.nullable().default(null),
-    environmentalClass: environmentalClassSchema.nullable().default(null),
-    quiescentMa: milliampsSchema.nullable().default(null),
-    alarmMa: milliampsSchema.nullable().default(null),
   })
   .strict()
   .superRefine((zone, context) => {
@@ -226,12 +221,8 @@ export const zoneSchema = z.object({
   tamperOhms: z.number().nullable(),
   alarmOhms: z.number().nullable(),
   coreMap: z.array(z.object({ colour: z.enum(CORE_COLOURS), terminal: z.string() })),
-  areaId: z.string().nullable(),
+  ...fittedComponentRecordFields,
   attributes: z.array(z.enum(ZONE_ATTRIBUTES)),
-  grade: z.number().nullable(),
-  environmentalClass: z.number().nullable(),
-  quiescentMa: z.number().nullable(),
-  alarmMa: z.number().nullable(),
 });
 export type Zone = z.infer<typeof zoneSchema>;
 
