@@ -149,6 +149,9 @@ export function demoSitePlans(count = 25): DemoSitePlan[] {
       accessNotes: random.pick(commercial ? COMMERCIAL_ACCESS : DOMESTIC_ACCESS),
     });
   }
+  // The busiest commercial site shows a full 40-zone schedule.
+  const largest = plans.findIndex((plan) => plan.premisesType === 'commercial');
+  plans[largest] = { ...plans[largest]!, zones: 40 };
   // The first site is the demo homeowner's own home, kept recognisable in the walkthrough.
   plans[0] = {
     ...plans[0]!,
