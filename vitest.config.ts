@@ -16,7 +16,12 @@ export default defineConfig({
         resolve: { alias },
         test: {
           name: 'unit',
-          include: ['tests/unit/**/*.test.ts', 'server/**/*.test.ts', 'idp/**/*.test.ts'],
+          include: [
+            'tests/unit/**/*.test.ts',
+            'tests/calc/**/*.test.ts',
+            'server/**/*.test.ts',
+            'idp/**/*.test.ts',
+          ],
           environment: 'node',
         },
       },
