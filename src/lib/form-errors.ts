@@ -31,6 +31,14 @@ export function applyServerFieldErrors<Values extends FieldValues>(
   return unplaced;
 }
 
+/**
+ * An `isShownField` for forms whose fields sit at the top level: an API error path is shown
+ * beside its field when it starts with one of `fieldNames` ("unavailable.0.to" → "unavailable").
+ */
+export function isUnderFields(fieldNames: readonly string[]): (fieldPath: string) => boolean {
+  return (fieldPath) => fieldNames.includes(fieldPath.split('.')[0] ?? '');
+}
+
 type ErrorTree = { message?: unknown; type?: unknown } | readonly unknown[] | undefined;
 
 /** Counts the field errors in a react-hook-form errors object, however deeply nested. */

@@ -1,13 +1,13 @@
-import { useEffect, useState, type ReactNode } from 'react';
+import { useState, type ReactNode } from 'react';
 import { zodResolver } from '@hookform/resolvers/zod';
-import { CircleCheck, CircleDot, Plus, RotateCcw, Save } from 'lucide-react';
 import { FormProvider, useFieldArray, useForm } from 'react-hook-form';
 import type { z } from 'zod';
 
-import { Button } from '@/components/ui/button';
-import { FieldErrorMessage } from '@/components/ui/form-field';
+import { EditableRowList } from '@/components/forms/editable-row';
+import { ListSaveBar } from '@/components/forms/list-save-bar';
+import { useRowListFocus } from '@/components/forms/use-row-list-focus';
 import { FormProblem } from '@/components/ui/form-problem';
-import { rowActionIds } from '@/components/ui/row-action-ids';
+import { LiveMessage } from '@/components/ui/live-message';
 import { useDevices } from '@/features/devices/api/get-devices';
 import {
   saveDevicesSchema,
@@ -16,7 +16,7 @@ import {
 } from '@/features/devices/api/save-devices';
 import { DeviceRow } from '@/features/devices/components/device-row';
 import {
-  deviceRowHeadingId,
+  DEVICE_ROW_KIND,
   duplicateDeviceRow,
   isDeviceFieldShown,
   newDeviceRow,
@@ -25,8 +25,9 @@ import {
   type DeviceListFormValues,
 } from '@/features/devices/utils/device-form-values';
 import { applyServerFieldErrors, countFieldErrors } from '@/lib/form-errors';
+import { useReloadLatest } from '@/lib/use-reload-latest';
+import { useShowNewerSavedVersion } from '@/lib/use-show-newer-saved-version';
 import { useUnsavedChangesGuard } from '@/lib/use-unsaved-changes-guard';
-import { useFocusAfterRender } from '@/lib/use-focus-after-render';
 
 const ADD_DEVICE_ID = 'add-device';
 
@@ -57,18 +58,24 @@ function DeviceListForm({
   });
   const { control, getValues, formState } = form;
   const { fields, append, insert, move, remove } = useFieldArray({ control, name: 'devices' });
-  const focusAfterRender = useFocusAfterRender();
+  const { moveRow, removeRow } = useRowListFocus({
+    fields,
+    move,
+    remove,
+    rowKind: DEVICE_ROW_KIND,
+    addButtonId: ADD_DEVICE_ID,
+  });
   const [announcement, setAnnouncement] = useState('');
   const [unplacedMessages, setUnplacedMessages] = useState<string[]>([]);
-  const [isReloading, setIsReloading] = useState(false);
   const { isDirty } = formState;
 
-  // A newer list reached the cache: show it, unless this form holds unsaved typing.
-  useEffect(() => {
-    if (!isDirty && getValues('devicesVersion') !== devicesVersion) {
-      form.reset(toFormValues(list, devicesVersion));
-    }
-  }, [form, getValues, isDirty, list, devicesVersion]);
+  useShowNewerSavedVersion({
+    form,
+    versionField: 'devicesVersion',
+    saved: list,
+    savedVersion: devicesVersion,
+    toFormValues,
+  });
 
   const saveDevices = useSaveDevices({
     onSuccess: (saved) => {
@@ -99,41 +106,29 @@ function DeviceListForm({
   };
 
   const moveDevice = (index: number, to: number) => {
-    const field = fields[index];
-    if (!field) return;
-    move(index, to);
-    const ids = rowActionIds(`device-${field.id}`);
-    focusAfterRender(...(to < index ? [ids.up, ids.down] : [ids.down, ids.up]));
+    if (!moveRow(index, to)) return;
     setAnnouncement(
       `Device ${index + 1} moved ${to < index ? 'up' : 'down'}; it is now device ${to + 1}.`,
     );
   };
 
   const removeDevice = (index: number) => {
-    const neighbour = fields[index + 1] ?? fields[index - 1];
-    remove(index);
-    focusAfterRender(neighbour ? deviceRowHeadingId(neighbour.id) : ADD_DEVICE_ID);
+    removeRow(index);
     setAnnouncement(`Device ${index + 1} removed. Save the devices to make it final.`);
   };
 
-  const reloadLatest = async () => {
-    setIsReloading(true);
-    try {
-      const latest = await onReloadLatest();
-      if (latest && latest.devicesVersion !== null) {
-        form.reset(toFormValues(latest, latest.devicesVersion));
-        saveDevices.reset();
-        setAnnouncement('Showing the latest saved devices.');
-      }
-    } finally {
-      setIsReloading(false);
+  const { isReloading, reloadLatest } = useReloadLatest(async () => {
+    const latest = await onReloadLatest();
+    if (latest && latest.devicesVersion !== null) {
+      form.reset(toFormValues(latest, latest.devicesVersion));
+      saveDevices.reset();
+      setAnnouncement('Showing the latest saved devices.');
     }
-  };
+  });
 
   useUnsavedChangesGuard(isDirty && !saveDevices.isPending);
 
   const deviceErrors = formState.errors.devices;
-  const isSaved = !isDirty && saveDevices.isSuccess;
 
   return (
     <FormProvider {...form}>
@@ -144,71 +139,45 @@ function DeviceListForm({
           fieldErrorCount={countFieldErrors(formState.errors)}
           error={saveDevices.error}
           unplacedMessages={unplacedMessages}
-          onReloadLatest={() => void reloadLatest()}
+          onReloadLatest={reloadLatest}
           isReloading={isReloading}
         />
-        {fields.length === 0 ? (
-          <p className="rounded-lg border border-dashed border-hairline bg-white px-4 py-6 text-center text-ink-muted">
-            No devices yet. Add the keypads, sounders, expanders and communicators fitted.
-          </p>
-        ) : (
-          <ol aria-label="Devices" className="grid gap-3">
-            {fields.map((field, index) => (
-              <DeviceRow
-                key={field.id}
-                index={index}
-                rowCount={fields.length}
-                rowKey={field.id}
-                areas={areas}
-                onMoveUp={() => moveDevice(index, index - 1)}
-                onMoveDown={() => moveDevice(index, index + 1)}
-                onDuplicate={() => duplicateDevice(index)}
-                onRemove={() => removeDevice(index)}
-              />
-            ))}
-          </ol>
-        )}
-        <FieldErrorMessage message={deviceErrors?.message ?? deviceErrors?.root?.message} />
-
-        <div className="flex flex-wrap items-center gap-3 rounded-lg border border-hairline bg-white px-4 py-3">
-          <Button id={ADD_DEVICE_ID} variant="secondary" onClick={addDevice}>
-            <Plus aria-hidden="true" className="size-4" />
-            Add device
-          </Button>
-          <Button type="submit" disabled={saveDevices.isPending}>
-            <Save aria-hidden="true" className="size-4" />
-            {saveDevices.isPending ? 'Saving…' : 'Save devices'}
-          </Button>
-          <Button
-            variant="secondary"
-            disabled={!isDirty || saveDevices.isPending}
-            onClick={() => {
-              form.reset();
-              setAnnouncement('Changes discarded: showing the saved devices.');
-            }}
-          >
-            <RotateCcw aria-hidden="true" className="size-4" />
-            Discard changes
-          </Button>
-          <p className="ml-auto flex items-center gap-1.5 text-sm">
-            <span className="font-mono font-semibold">{fields.length}</span>
-            {fields.length === 1 ? 'device' : 'devices'}
-            {isDirty ? (
-              <span className="ml-2 inline-flex items-center gap-1 font-medium text-fault-text">
-                <CircleDot aria-hidden="true" className="size-4" />
-                Unsaved changes
-              </span>
-            ) : isSaved ? (
-              <span className="ml-2 inline-flex items-center gap-1 font-medium text-normal">
-                <CircleCheck aria-hidden="true" className="size-4" />
-                Saved
-              </span>
-            ) : null}
-          </p>
-        </div>
-        <p role="status" className="sr-only">
-          {announcement}
-        </p>
+        <EditableRowList
+          label="Devices"
+          rowCount={fields.length}
+          emptyMessage="No devices yet. Add the keypads, sounders, expanders and communicators fitted."
+          error={deviceErrors?.message ?? deviceErrors?.root?.message}
+        >
+          {fields.map((field, index) => (
+            <DeviceRow
+              key={field.id}
+              index={index}
+              rowCount={fields.length}
+              rowKey={field.id}
+              areas={areas}
+              onMoveUp={() => moveDevice(index, index - 1)}
+              onMoveDown={() => moveDevice(index, index + 1)}
+              onDuplicate={() => duplicateDevice(index)}
+              onRemove={() => removeDevice(index)}
+            />
+          ))}
+        </EditableRowList>
+        <ListSaveBar
+          addButtonId={ADD_DEVICE_ID}
+          addLabel="Add device"
+          onAdd={addDevice}
+          saveLabel="Save devices"
+          isSaving={saveDevices.isPending}
+          hasUnsavedChanges={isDirty}
+          isSaved={!isDirty && saveDevices.isSuccess}
+          onDiscard={() => {
+            form.reset();
+            setAnnouncement('Changes discarded: showing the saved devices.');
+          }}
+          rowCount={fields.length}
+          rowNoun={['device', 'devices']}
+        />
+        <LiveMessage message={announcement} />
       </form>
     </FormProvider>
   );

@@ -49,4 +49,5 @@ export function isDeviceFieldShown(fieldPath: string): boolean {
   return shownDeviceField.test(fieldPath);
 }
 
-export const deviceRowHeadingId = (rowKey: string) => `device-${rowKey}-heading`;
+/** What a device row's ids start with: "device-<key>-heading" (see `editableRowIds`). */
+export const DEVICE_ROW_KIND = 'device';

@@ -5,18 +5,17 @@ import {
   type UpdateKeyholderInput,
 } from '@server/keyholders/schema';
 import { useQueryClient } from '@tanstack/react-query';
-import { useEffect, useState } from 'react';
-import { FormProvider, useForm } from 'react-hook-form';
+import { useState } from 'react';
+import { useForm } from 'react-hook-form';
 import type { z } from 'zod';
 
-import { Button } from '@/components/ui/button';
-import { FormProblem } from '@/components/ui/form-problem';
-import { LoadingStatus } from '@/components/ui/loading-status';
+import { InPlaceRecordForm } from '@/components/forms/in-place-record-form';
 import { getKeyholdersQueryOptions } from '@/features/keyholders/api/get-keyholders';
 import { useUpdateKeyholder } from '@/features/keyholders/api/update-keyholder';
 import { KeyholderFields } from '@/features/keyholders/components/keyholder-fields';
 import { isKeyholderField } from '@/features/keyholders/components/keyholder-form-values';
-import { applyServerFieldErrors, countFieldErrors } from '@/lib/form-errors';
+import { applyServerFieldErrors } from '@/lib/form-errors';
+import { useReloadLatest } from '@/lib/use-reload-latest';
 
 function toFormValues(keyholder: Keyholder): UpdateKeyholderInput {
   return {
@@ -51,11 +50,6 @@ export function EditKeyholderForm({
     defaultValues: toFormValues(keyholder),
   });
   const [unplacedMessages, setUnplacedMessages] = useState<string[]>([]);
-  const { setFocus } = form;
-
-  useEffect(() => setFocus('name'), [setFocus]);
-
-  const [isReloading, setIsReloading] = useState(false);
   const [reloadMessage, setReloadMessage] = useState('');
   const updateKeyholder = useUpdateKeyholder({
     mutationConfig: {
@@ -66,62 +60,42 @@ export function EditKeyholderForm({
   });
 
   // After a 409 the person may drop their typing for what is saved now, new version included.
-  const reloadLatest = async () => {
-    setIsReloading(true);
-    try {
-      const keyholders = await queryClient.fetchQuery({
-        ...getKeyholdersQueryOptions(siteId),
-        staleTime: 0,
-      });
-      const latest = keyholders.find((candidate) => candidate.id === keyholder.id);
-      updateKeyholder.reset();
-      if (latest) {
-        form.reset(toFormValues(latest));
-        setReloadMessage('The form now shows the latest saved details.');
-      } else {
-        setReloadMessage('Someone else has removed this keyholder from the call plan.');
-      }
-    } finally {
-      setIsReloading(false);
+  const { isReloading, reloadLatest } = useReloadLatest(async () => {
+    const keyholders = await queryClient.fetchQuery({
+      ...getKeyholdersQueryOptions(siteId),
+      staleTime: 0,
+    });
+    const latest = keyholders.find((candidate) => candidate.id === keyholder.id);
+    updateKeyholder.reset();
+    if (latest) {
+      form.reset(toFormValues(latest));
+      setReloadMessage('The form now shows the latest saved details.');
+    } else {
+      setReloadMessage('Someone else has removed this keyholder from the call plan.');
     }
-  };
+  });
 
   return (
-    <FormProvider {...form}>
-      <form
-        noValidate
-        aria-labelledby={headingId}
-        onSubmit={form.handleSubmit((data) => {
-          setUnplacedMessages([]);
-          setReloadMessage('');
-          updateKeyholder.mutate({ siteId, keyholderId: keyholder.id, data });
-        })}
-        className="grid gap-5"
-      >
-        <FormProblem
-          subject={`${keyholder.name}'s entry`}
-          fieldErrorCount={
-            form.formState.submitCount > 0 ? countFieldErrors(form.formState.errors) : 0
-          }
-          error={updateKeyholder.error}
-          unplacedMessages={unplacedMessages}
-          onReloadLatest={() => void reloadLatest()}
-          isReloading={isReloading}
-        />
-        <KeyholderFields />
-        <div className="flex flex-wrap items-center gap-3">
-          <Button type="submit" size="lg" disabled={updateKeyholder.isPending}>
-            Save changes
-          </Button>
-          <Button variant="secondary" size="lg" onClick={onCancel}>
-            Cancel
-          </Button>
-          {updateKeyholder.isPending ? <LoadingStatus label="Saving" /> : null}
-          <p role="status" className="font-semibold">
-            {reloadMessage}
-          </p>
-        </div>
-      </form>
-    </FormProvider>
+    <InPlaceRecordForm
+      form={form}
+      headingId={headingId}
+      firstField="name"
+      onSubmit={(data) => {
+        setUnplacedMessages([]);
+        setReloadMessage('');
+        updateKeyholder.mutate({ siteId, keyholderId: keyholder.id, data });
+      }}
+      subject={`${keyholder.name}'s entry`}
+      error={updateKeyholder.error}
+      unplacedMessages={unplacedMessages}
+      onReloadLatest={reloadLatest}
+      isReloading={isReloading}
+      saveLabel="Save changes"
+      isSaving={updateKeyholder.isPending}
+      onCancel={onCancel}
+      statusMessage={reloadMessage}
+    >
+      <KeyholderFields />
+    </InPlaceRecordForm>
   );
 }

@@ -1,5 +1,7 @@
 import type { CreateKeyholderInput } from '@server/keyholders/schema';
 
+import { isUnderFields } from '@/lib/form-errors';
+
 /** What the add and edit forms hold while someone types. */
 export type KeyholderFormValues = CreateKeyholderInput;
 
@@ -13,5 +15,4 @@ const keyholderFieldNames: ReadonlyArray<string> = [
 ] satisfies ReadonlyArray<keyof KeyholderFormValues>;
 
 /** Whether an API error path ("unavailable.0.to") names a field these inputs show. */
-export const isKeyholderField = (fieldPath: string) =>
-  keyholderFieldNames.includes(fieldPath.split('.')[0] ?? '');
+export const isKeyholderField = isUnderFields(keyholderFieldNames);

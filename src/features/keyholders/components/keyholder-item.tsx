@@ -9,10 +9,12 @@ import {
   Pencil,
   TriangleAlert,
 } from 'lucide-react';
-import { useEffect, useId, useRef, useState, type ReactNode } from 'react';
+import { useRef, useState } from 'react';
 
+import { InPlaceFormSection } from '@/components/forms/in-place-form-section';
 import { Button } from '@/components/ui/button';
 import { ConfirmButton } from '@/components/ui/confirm-button';
+import { DetailItem } from '@/components/ui/detail-item';
 import { ProblemAlert } from '@/components/ui/problem-alert';
 import { TelLink } from '@/components/ui/tel-link';
 import { useConfirmKeyholder } from '@/features/keyholders/api/confirm-keyholder';
@@ -20,6 +22,7 @@ import { useDeleteKeyholder } from '@/features/keyholders/api/delete-keyholder';
 import { useInviteKeyholder } from '@/features/keyholders/api/invite-keyholder';
 import { EditKeyholderForm } from '@/features/keyholders/components/edit-keyholder-form';
 import { formatCalendarDate, todayAsCalendarDate } from '@/lib/dates';
+import { useInPlaceForm } from '@/lib/use-in-place-form';
 import { formatDateTime } from '@/utils/format';
 
 export type MoveDirection = 'up' | 'down';
@@ -35,15 +38,6 @@ type KeyholderItemProps = {
   announce: (message: string) => void;
   onRemoved: (keyholder: Keyholder) => void;
 };
-
-function Detail({ term, children }: { term: string; children: ReactNode }) {
-  return (
-    <div className="min-w-0">
-      <dt className="text-sm text-ink-muted">{term}</dt>
-      <dd className="break-words">{children}</dd>
-    </div>
-  );
-}
 
 function AttendTime({ minutes }: { minutes: number }) {
   const isOverTarget = minutes > KEYHOLDER_TARGET_MINUTES;
@@ -96,24 +90,9 @@ export function KeyholderItem({
   announce,
   onRemoved,
 }: KeyholderItemProps) {
-  const [isEditing, setIsEditing] = useState(false);
   const editButtonRef = useRef<HTMLButtonElement>(null);
-  const returnFocusToEdit = useRef(false);
-
-  // Closing the form removes the field that had focus; carry on from the Edit button instead.
-  useEffect(() => {
-    if (!isEditing && returnFocusToEdit.current) {
-      returnFocusToEdit.current = false;
-      editButtonRef.current?.focus();
-    }
-  }, [isEditing]);
-
-  const closeEditor = () => {
-    returnFocusToEdit.current = true;
-    setIsEditing(false);
-  };
+  const { isOpen: isEditing, open: openEditor, close: closeEditor } = useInPlaceForm(editButtonRef);
   const [invitationSent, setInvitationSent] = useState(false);
-  const editHeadingId = useId();
   const { name } = keyholder;
 
   const confirmKeyholder = useConfirmKeyholder({
@@ -144,34 +123,33 @@ export function KeyholderItem({
       </div>
 
       {isEditing ? (
-        <section aria-labelledby={editHeadingId} className="grid gap-3">
-          <h4 id={editHeadingId} className="font-semibold">
-            Change {name}&apos;s details
-          </h4>
-          <EditKeyholderForm
-            siteId={siteId}
-            keyholder={keyholder}
-            headingId={editHeadingId}
-            onSaved={(saved) => {
-              closeEditor();
-              announce(`Saved ${saved.name}'s details.`);
-            }}
-            onCancel={closeEditor}
-          />
-        </section>
+        <InPlaceFormSection title={`Change ${name}'s details`} headingLevel={4}>
+          {(headingId) => (
+            <EditKeyholderForm
+              siteId={siteId}
+              keyholder={keyholder}
+              headingId={headingId}
+              onSaved={(saved) => {
+                closeEditor();
+                announce(`Saved ${saved.name}'s details.`);
+              }}
+              onCancel={closeEditor}
+            />
+          )}
+        </InPlaceFormSection>
       ) : (
         <dl className="grid gap-x-6 gap-y-3 sm:grid-cols-2 lg:grid-cols-3">
-          <Detail term="Mobile phone">
+          <DetailItem term="Mobile phone">
             <TelLink phone={keyholder.phone} accessiblePrefix={`Call ${name} on`} />
-          </Detail>
-          <Detail term="E-mail">{keyholder.email ?? 'None given'}</Detail>
-          <Detail term="Minutes to reach the site">
+          </DetailItem>
+          <DetailItem term="E-mail">{keyholder.email ?? 'None given'}</DetailItem>
+          <DetailItem term="Minutes to reach the site">
             <AttendTime minutes={keyholder.minutesToAttend} />
-          </Detail>
-          <Detail term="Dates away">
+          </DetailItem>
+          <DetailItem term="Dates away">
             <UnavailableDates ranges={keyholder.unavailable} />
-          </Detail>
-          <Detail term="Details last checked">
+          </DetailItem>
+          <DetailItem term="Details last checked">
             {keyholder.lastConfirmedAt ? (
               <time dateTime={keyholder.lastConfirmedAt}>
                 {formatDateTime(keyholder.lastConfirmedAt)}
@@ -179,8 +157,8 @@ export function KeyholderItem({
             ) : (
               'Never'
             )}
-          </Detail>
-          <Detail term="Wardbook account">
+          </DetailItem>
+          <DetailItem term="Wardbook account">
             {keyholder.hasAccount ? (
               <span className="inline-flex items-center gap-1.5">
                 <CircleCheck aria-hidden="true" className="size-4 shrink-0 text-normal" />
@@ -192,7 +170,7 @@ export function KeyholderItem({
                 {invitationSent ? 'Invitation sent' : 'No account yet'}
               </span>
             )}
-          </Detail>
+          </DetailItem>
         </dl>
       )}
 
@@ -220,12 +198,7 @@ export function KeyholderItem({
             <ArrowDown aria-hidden="true" className="size-5" />
             Move <span className="sr-only">{name}</span> down
           </Button>
-          <Button
-            ref={editButtonRef}
-            variant="secondary"
-            size="lg"
-            onClick={() => setIsEditing(true)}
-          >
+          <Button ref={editButtonRef} variant="secondary" size="lg" onClick={openEditor}>
             <Pencil aria-hidden="true" className="size-5" />
             Edit <span className="sr-only">{name}</span>
           </Button>

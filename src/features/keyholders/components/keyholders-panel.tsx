@@ -1,9 +1,9 @@
 import type { Keyholder } from '@server/keyholders/schema';
-import { PhoneCall, Plus } from 'lucide-react';
-import { useEffect, useId, useRef, useState } from 'react';
+import { PhoneCall } from 'lucide-react';
+import { useEffect, useRef, useState } from 'react';
 
+import { AddInPlace } from '@/components/forms/add-in-place';
 import { AlarmAttendanceSafetyCard } from '@/components/ui/alarm-attendance-safety-card';
-import { Button } from '@/components/ui/button';
 import { Card } from '@/components/ui/card';
 import { LiveMessage } from '@/components/ui/live-message';
 import { Notice } from '@/components/ui/notice';
@@ -34,15 +34,12 @@ function moved(ids: readonly string[], id: string, direction: MoveDirection): st
 export function KeyholdersPanel({ siteId, viewer }: KeyholdersPanelProps) {
   const { data: keyholders } = useKeyholders(siteId);
   const reorder = useReorderKeyholders();
-  const [isAdding, setIsAdding] = useState(false);
-  const [message, setMessage] = useState('');
-  const addHeadingId = useId();
   const addButtonRef = useRef<HTMLButtonElement>(null);
+  const [message, setMessage] = useState('');
   const moveButtons = useRef(new Map<string, HTMLButtonElement>());
   // React may move a list item's DOM node when the order changes, which drops focus; this says
   // where focus should land once the new order has rendered.
   const focusAfterMove = useRef<{ id: string; direction: MoveDirection } | null>(null);
-  const focusAddButton = useRef(false);
 
   useEffect(() => {
     const target = focusAfterMove.current;
@@ -55,13 +52,6 @@ export function KeyholdersPanel({ siteId, viewer }: KeyholdersPanelProps) {
     }
   }, [keyholders]);
 
-  useEffect(() => {
-    if (!isAdding && focusAddButton.current) {
-      focusAddButton.current = false;
-      addButtonRef.current?.focus();
-    }
-  }, [isAdding]);
-
   const move = (keyholder: Keyholder, direction: MoveDirection) => {
     const keyholderIds = moved(
       keyholders.map((candidate) => candidate.id),
@@ -72,11 +62,6 @@ export function KeyholdersPanel({ siteId, viewer }: KeyholdersPanelProps) {
     focusAfterMove.current = { id: keyholder.id, direction };
     reorder.mutate({ siteId, keyholderIds });
     setMessage(`${keyholder.name} is now number ${newPosition} of ${keyholderIds.length}.`);
-  };
-
-  const closeAddForm = () => {
-    focusAddButton.current = true;
-    setIsAdding(false);
   };
 
   const canInvite = viewer === 'office' || viewer === 'homeowner';
@@ -132,29 +117,19 @@ export function KeyholdersPanel({ siteId, viewer }: KeyholdersPanelProps) {
           </ol>
         ) : null}
 
-        <div className="border-t border-hairline bg-paper px-4 py-5 md:px-5">
-          {isAdding ? (
-            <section aria-labelledby={addHeadingId} className="grid gap-4">
-              <h3 id={addHeadingId} className="text-lg font-semibold">
-                New keyholder
-              </h3>
-              <AddKeyholderForm
-                siteId={siteId}
-                headingId={addHeadingId}
-                onAdded={(added) => {
-                  setMessage(`${added.name} added to the call plan as number ${added.callOrder}.`);
-                  closeAddForm();
-                }}
-                onCancel={closeAddForm}
-              />
-            </section>
-          ) : (
-            <Button ref={addButtonRef} size="lg" onClick={() => setIsAdding(true)}>
-              <Plus aria-hidden="true" className="size-5" />
-              Add keyholder
-            </Button>
+        <AddInPlace addLabel="Add keyholder" formTitle="New keyholder" addButtonRef={addButtonRef}>
+          {({ headingId, close }) => (
+            <AddKeyholderForm
+              siteId={siteId}
+              headingId={headingId}
+              onAdded={(added) => {
+                setMessage(`${added.name} added to the call plan as number ${added.callOrder}.`);
+                close();
+              }}
+              onCancel={close}
+            />
           )}
-        </div>
+        </AddInPlace>
         <LiveMessage message={message} />
       </Card>
 

@@ -1,11 +1,10 @@
 import { useState } from 'react';
 import { zodResolver } from '@hookform/resolvers/zod';
-import { Save } from 'lucide-react';
 import { FormProvider, useForm } from 'react-hook-form';
 import { Link, useNavigate } from 'react-router-dom';
 import type { z } from 'zod';
 
-import { Button } from '@/components/ui/button';
+import { SubmitButton } from '@/components/forms/submit-button';
 import { buttonClassName } from '@/components/ui/button-styles';
 import { FormProblem } from '@/components/ui/form-problem';
 import { paths, type SiteRole } from '@/config/paths';
@@ -64,10 +63,11 @@ export function CreateSiteForm({ role }: { role: SiteRole }) {
         />
         <SiteFields idPrefix="new-site" />
         <div className="flex flex-wrap items-center gap-3">
-          <Button type="submit" disabled={createSite.isPending}>
-            <Save aria-hidden="true" className="size-4" />
-            {createSite.isPending ? 'Creating site…' : 'Create site'}
-          </Button>
+          <SubmitButton
+            label="Create site"
+            pendingLabel="Creating site…"
+            isPending={createSite.isPending}
+          />
           <Link
             to={paths.sites.list.getHref(role)}
             className={buttonClassName({ variant: 'secondary' })}

@@ -1,17 +1,18 @@
-import { useEffect, useState } from 'react';
+import { useState } from 'react';
 import { zodResolver } from '@hookform/resolvers/zod';
-import { CircleCheck, Save } from 'lucide-react';
 import { FormProvider, useForm } from 'react-hook-form';
 import type { z } from 'zod';
 
 import { siteConsistencyProblems, updateSiteSchema, type SiteDetail } from '@server/sites/schema';
-import { Button } from '@/components/ui/button';
+import { SaveRow } from '@/components/forms/save-row';
 import { FormProblem } from '@/components/ui/form-problem';
 import { useSite } from '@/features/sites/api/get-site';
 import { useUpdateSite } from '@/features/sites/api/update-site';
 import { SiteFields } from '@/features/sites/components/site-fields';
 import { SITE_FIELD_NAMES } from '@/features/sites/utils/site-field-names';
 import { applyServerFieldErrors, countFieldErrors } from '@/lib/form-errors';
+import { useReloadLatest } from '@/lib/use-reload-latest';
+import { useShowNewerSavedVersion } from '@/lib/use-show-newer-saved-version';
 import { useUnsavedChangesGuard } from '@/lib/use-unsaved-changes-guard';
 
 // The form always sends every field, so the whole record can be checked as it will be saved.
@@ -54,12 +55,13 @@ export function EditSiteForm({ siteId }: { siteId: string }) {
   });
   const { isDirty } = form.formState;
 
-  // A newer version reached the cache (a refetch, another tab): show it unless typing would be lost.
-  useEffect(() => {
-    if (!isDirty && form.getValues('version') !== site.data.version) {
-      form.reset(toFormValues(site.data));
-    }
-  }, [form, isDirty, site.data]);
+  useShowNewerSavedVersion({
+    form,
+    versionField: 'version',
+    saved: site.data,
+    savedVersion: site.data.version,
+    toFormValues,
+  });
 
   const updateSite = useUpdateSite({
     onSuccess: (saved) => {
@@ -71,7 +73,6 @@ export function EditSiteForm({ siteId }: { siteId: string }) {
         applyServerFieldErrors(error, form.setError, (field) => SITE_FIELD_NAMES.includes(field)),
       ),
   });
-  const [isReloading, setIsReloading] = useState(false);
 
   useUnsavedChangesGuard(isDirty && !updateSite.isPending);
 
@@ -81,19 +82,14 @@ export function EditSiteForm({ siteId }: { siteId: string }) {
     updateSite.mutate({ siteId, values });
   });
 
-  const reloadLatest = async () => {
-    setIsReloading(true);
-    try {
-      const latest = await site.refetch();
-      if (latest.data) {
-        form.reset(toFormValues(latest.data));
-        updateSite.reset();
-        setSavedMessage('Showing the latest saved details.');
-      }
-    } finally {
-      setIsReloading(false);
+  const { isReloading, reloadLatest } = useReloadLatest(async () => {
+    const latest = await site.refetch();
+    if (latest.data) {
+      form.reset(toFormValues(latest.data));
+      updateSite.reset();
+      setSavedMessage('Showing the latest saved details.');
     }
-  };
+  });
 
   return (
     <FormProvider {...form}>
@@ -104,7 +100,7 @@ export function EditSiteForm({ siteId }: { siteId: string }) {
           fieldErrorCount={countFieldErrors(form.formState.errors)}
           error={updateSite.error}
           unplacedMessages={unplacedMessages}
-          onReloadLatest={() => void reloadLatest()}
+          onReloadLatest={reloadLatest}
           isReloading={isReloading}
         />
         <SiteFields
@@ -112,20 +108,11 @@ export function EditSiteForm({ siteId }: { siteId: string }) {
           currentMonitoringCentre={site.data.monitoringCentre}
           headingLevel={3}
         />
-        <div className="flex flex-wrap items-center gap-4">
-          <Button type="submit" disabled={updateSite.isPending}>
-            <Save aria-hidden="true" className="size-4" />
-            {updateSite.isPending ? 'Saving…' : 'Save site details'}
-          </Button>
-          <p role="status" className="flex items-center gap-1.5 text-sm font-medium text-normal">
-            {savedMessage && !isDirty ? (
-              <>
-                <CircleCheck aria-hidden="true" className="size-4" />
-                {savedMessage}
-              </>
-            ) : null}
-          </p>
-        </div>
+        <SaveRow
+          saveLabel="Save site details"
+          isSaving={updateSite.isPending}
+          savedMessage={isDirty ? '' : savedMessage}
+        />
       </form>
     </FormProvider>
   );

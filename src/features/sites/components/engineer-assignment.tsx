@@ -1,9 +1,9 @@
 import { useState, type FormEvent } from 'react';
-import { CircleCheck, Save, UserCog } from 'lucide-react';
+import { UserCog } from 'lucide-react';
 
 import type { SiteDetail } from '@server/sites/schema';
 import { describeError } from '@/components/errors/describe-error';
-import { Button } from '@/components/ui/button';
+import { SaveRow } from '@/components/forms/save-row';
 import { Card } from '@/components/ui/card';
 import { checkboxClassName } from '@/components/ui/form-styles';
 import { LoadingStatus } from '@/components/ui/loading-status';
@@ -90,20 +90,12 @@ export function EngineerAssignment({ site }: { site: SiteDetail }) {
               </Notice>
             </div>
           ) : null}
-          <div className="flex flex-wrap items-center gap-4">
-            <Button type="submit" variant="secondary" disabled={assignEngineers.isPending}>
-              <Save aria-hidden="true" className="size-4" />
-              {assignEngineers.isPending ? 'Saving…' : 'Save engineers'}
-            </Button>
-            <p role="status" className="flex items-center gap-1.5 text-sm font-medium text-normal">
-              {savedMessage ? (
-                <>
-                  <CircleCheck aria-hidden="true" className="size-4 shrink-0" />
-                  {savedMessage}
-                </>
-              ) : null}
-            </p>
-          </div>
+          <SaveRow
+            saveLabel="Save engineers"
+            isSaving={assignEngineers.isPending}
+            savedMessage={savedMessage}
+            variant="secondary"
+          />
         </form>
       )}
     </Card>

@@ -1,4 +1,4 @@
-import { useRef, useState, type ChangeEvent } from 'react';
+import { useRef, useState, type ChangeEvent, type ReactNode } from 'react';
 import { Search, X } from 'lucide-react';
 import { useNavigation } from 'react-router-dom';
 
@@ -90,6 +90,25 @@ function SearchBox({ value, onSearch }: { value: string; onSearch: (q: string) =
   );
 }
 
+type FilterSelectProps = {
+  label: string;
+  value: string | number | undefined;
+  onChange: (event: ChangeEvent<HTMLSelectElement>) => void;
+  children: ReactNode;
+};
+
+/** One of the list's filters; its first option, with an empty value, means "no filter". */
+function FilterSelect({ label, value, onChange, children }: FilterSelectProps) {
+  return (
+    <label className="block text-sm font-medium">
+      <span className="mb-1 block">{label}</span>
+      <select className={selectClassName()} value={value ?? ''} onChange={onChange}>
+        {children}
+      </select>
+    </label>
+  );
+}
+
 export function SiteListFilterBar({
   filters,
   engineers,
@@ -108,64 +127,36 @@ export function SiteListFilterBar({
     <div className="flex flex-wrap items-start gap-x-4 gap-y-3 px-4 py-4 md:px-5">
       <SearchBox value={filters.q ?? ''} onSearch={(q) => onChange({ q: q || undefined })} />
       <div className="grid flex-[2_1_32rem] grid-cols-2 gap-x-4 gap-y-3 sm:grid-cols-4">
-        <label className="block text-sm font-medium">
-          <span className="mb-1 block">Grade</span>
-          <select
-            className={selectClassName()}
-            value={filters.grade ?? ''}
-            onChange={select('grade')}
-          >
-            <option value="">Any grade</option>
-            {GRADES.map((grade) => (
-              <option key={grade} value={grade}>
-                Grade {grade}
-              </option>
-            ))}
-          </select>
-        </label>
-        <label className="block text-sm font-medium">
-          <span className="mb-1 block">URN status</span>
-          <select
-            className={selectClassName()}
-            value={filters.urnStatus ?? ''}
-            onChange={select('urnStatus')}
-          >
-            <option value="">Any status</option>
-            {URN_STATUSES.map((status) => (
-              <option key={status} value={status}>
-                {URN_STATUS_LABELS[status]}
-              </option>
-            ))}
-          </select>
-        </label>
-        <label className="block text-sm font-medium">
-          <span className="mb-1 block">Monitored</span>
-          <select
-            className={selectClassName()}
-            value={filters.monitored ?? ''}
-            onChange={select('monitored')}
-          >
-            <option value="">Either</option>
-            <option value="yes">Monitored</option>
-            <option value="no">Not monitored</option>
-          </select>
-        </label>
-        <label className="block text-sm font-medium">
-          <span className="mb-1 block">Engineer</span>
-          <select
-            className={selectClassName()}
-            value={filters.engineerId ?? ''}
-            onChange={select('engineerId')}
-          >
-            <option value="">Any engineer</option>
-            {engineers.map((engineer) => (
-              <option key={engineer.id} value={engineer.id}>
-                {engineer.displayName}
-                {engineer.id === currentUserId ? ' (you)' : ''}
-              </option>
-            ))}
-          </select>
-        </label>
+        <FilterSelect label="Grade" value={filters.grade} onChange={select('grade')}>
+          <option value="">Any grade</option>
+          {GRADES.map((grade) => (
+            <option key={grade} value={grade}>
+              Grade {grade}
+            </option>
+          ))}
+        </FilterSelect>
+        <FilterSelect label="URN status" value={filters.urnStatus} onChange={select('urnStatus')}>
+          <option value="">Any status</option>
+          {URN_STATUSES.map((status) => (
+            <option key={status} value={status}>
+              {URN_STATUS_LABELS[status]}
+            </option>
+          ))}
+        </FilterSelect>
+        <FilterSelect label="Monitored" value={filters.monitored} onChange={select('monitored')}>
+          <option value="">Either</option>
+          <option value="yes">Monitored</option>
+          <option value="no">Not monitored</option>
+        </FilterSelect>
+        <FilterSelect label="Engineer" value={filters.engineerId} onChange={select('engineerId')}>
+          <option value="">Any engineer</option>
+          {engineers.map((engineer) => (
+            <option key={engineer.id} value={engineer.id}>
+              {engineer.displayName}
+              {engineer.id === currentUserId ? ' (you)' : ''}
+            </option>
+          ))}
+        </FilterSelect>
       </div>
       {hasFilters ? (
         <Button

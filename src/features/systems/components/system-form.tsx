@@ -1,6 +1,6 @@
-import { useEffect, useState } from 'react';
+import { useState } from 'react';
 import { zodResolver } from '@hookform/resolvers/zod';
-import { CircleCheck, Cpu, Layers, Plus, Radio, Save, Trash2, Zap } from 'lucide-react';
+import { Cpu, Layers, Plus, Radio, Trash2, Zap } from 'lucide-react';
 import { FormProvider, useFieldArray, useForm, useFormContext, useWatch } from 'react-hook-form';
 import type { z } from 'zod';
 
@@ -11,6 +11,13 @@ import {
   saveSystemSchema,
   type SystemRecord,
 } from '@server/systems/schema';
+import {
+  DenseNumberField,
+  DenseSelectField,
+  DenseTextField,
+} from '@/components/forms/dense-fields';
+import { labelInRow } from '@/components/forms/row-label';
+import { SaveRow } from '@/components/forms/save-row';
 import { Button } from '@/components/ui/button';
 import { Card } from '@/components/ui/card';
 import { FieldErrorMessage, FormField } from '@/components/ui/form-field';
@@ -21,9 +28,12 @@ import { RowActions } from '@/components/ui/row-actions';
 import { useSystem } from '@/features/systems/api/get-system';
 import { useSaveSystem } from '@/features/systems/api/save-system';
 import { applyServerFieldErrors, countFieldErrors } from '@/lib/form-errors';
-import { useUnsavedChangesGuard } from '@/lib/use-unsaved-changes-guard';
 import { numberOrNull, textOrNull } from '@/lib/form-values';
+import { lowestFreeNumber } from '@/lib/lowest-free-number';
 import { useFocusAfterRender } from '@/lib/use-focus-after-render';
+import { useReloadLatest } from '@/lib/use-reload-latest';
+import { useShowNewerSavedVersion } from '@/lib/use-show-newer-saved-version';
+import { useUnsavedChangesGuard } from '@/lib/use-unsaved-changes-guard';
 
 type SystemFormValues = z.input<typeof saveSystemSchema>;
 type SystemFormOutput = z.output<typeof saveSystemSchema>;
@@ -73,13 +83,6 @@ function toFormValues(system: SystemRecord | null): SystemFormValues {
 
 function isShownField(fieldPath: string) {
   return fieldPath !== 'version' && fieldPath !== 'signallingPaths' && fieldPath !== 'areas';
-}
-
-function nextFreeAreaNumber(numbers: readonly unknown[]): number {
-  const used = new Set(numbers.filter((value): value is number => typeof value === 'number'));
-  let candidate = 1;
-  while (used.has(candidate)) candidate += 1;
-  return candidate;
 }
 
 function SignallingPaths() {
@@ -142,61 +145,35 @@ function SignallingPaths() {
                   />
                 </div>
                 <div className="grid gap-3 sm:grid-cols-2 lg:grid-cols-[12rem_8rem_minmax(0,1fr)_auto]">
-                  <FormField
+                  <DenseSelectField
                     label="Bearer"
                     accessibleLabel={`Bearer, path ${row}`}
-                    compact
                     error={rowErrors?.bearer?.message}
+                    control={control}
+                    name={`signallingPaths.${index}.bearer`}
                   >
-                    {(control) => (
-                      <select
-                        {...control}
-                        {...register(`signallingPaths.${index}.bearer`)}
-                        className={selectClassName({ size: 'dense' })}
-                      >
-                        {BEARERS.map((bearer) => (
-                          <option key={bearer} value={bearer}>
-                            {BEARER_LABELS[bearer]}
-                          </option>
-                        ))}
-                      </select>
-                    )}
-                  </FormField>
-                  <FormField
+                    {BEARERS.map((bearer) => (
+                      <option key={bearer} value={bearer}>
+                        {BEARER_LABELS[bearer]}
+                      </option>
+                    ))}
+                  </DenseSelectField>
+                  <DenseTextField
                     label="ATS category"
                     accessibleLabel={`ATS category, path ${row}`}
-                    compact
                     error={rowErrors?.atsCategory?.message}
-                  >
-                    {(control) => (
-                      <input
-                        {...control}
-                        {...register(`signallingPaths.${index}.atsCategory`)}
-                        className={inputClassName({
-                          size: 'dense',
-                          mono: true,
-                          className: 'uppercase',
-                        })}
-                        autoComplete="off"
-                        spellCheck={false}
-                      />
-                    )}
-                  </FormField>
-                  <FormField
+                    control={control}
+                    name={`signallingPaths.${index}.atsCategory`}
+                    code
+                    controlClassName="uppercase"
+                  />
+                  <DenseTextField
                     label="Description"
                     accessibleLabel={`Description, path ${row}`}
-                    compact
                     error={rowErrors?.description?.message}
-                  >
-                    {(control) => (
-                      <input
-                        {...control}
-                        {...register(`signallingPaths.${index}.description`)}
-                        className={inputClassName({ size: 'dense' })}
-                        autoComplete="off"
-                      />
-                    )}
-                  </FormField>
+                    control={control}
+                    name={`signallingPaths.${index}.description`}
+                  />
                   <label className="flex min-h-9 items-center gap-2 self-end text-sm">
                     <input
                       type="checkbox"
@@ -243,7 +220,6 @@ function SignallingPaths() {
 function Areas() {
   const {
     control,
-    register,
     getValues,
     formState: { errors },
   } = useFormContext<SystemFormValues>();
@@ -270,39 +246,24 @@ function Areas() {
                 key={field.id}
                 className="grid grid-cols-[5rem_minmax(0,1fr)_auto] items-start gap-3"
               >
-                <FormField
+                <DenseNumberField
                   label="Number"
-                  accessibleLabel={`Area number, row ${row}`}
-                  compact
+                  accessibleLabel={labelInRow('Area number', row)}
                   error={rowErrors?.number?.message}
-                >
-                  {(control) => (
-                    <input
-                      {...control}
-                      {...register(`areas.${index}.number`, { setValueAs: numberOrNull })}
-                      type="number"
-                      min={1}
-                      max={99}
-                      inputMode="numeric"
-                      className={inputClassName({ size: 'dense', mono: true })}
-                    />
-                  )}
-                </FormField>
-                <FormField
+                  control={control}
+                  name={`areas.${index}.number`}
+                  registerOptions={{ setValueAs: numberOrNull }}
+                  min={1}
+                  max={99}
+                  inputMode="numeric"
+                />
+                <DenseTextField
                   label="Area name"
-                  accessibleLabel={`Area name, row ${row}`}
-                  compact
+                  accessibleLabel={labelInRow('Area name', row)}
                   error={rowErrors?.name?.message}
-                >
-                  {(control) => (
-                    <input
-                      {...control}
-                      {...register(`areas.${index}.name`)}
-                      className={inputClassName({ size: 'dense' })}
-                      autoComplete="off"
-                    />
-                  )}
-                </FormField>
+                  control={control}
+                  name={`areas.${index}.name`}
+                />
                 <Button
                   id={`area-${field.id}-remove`}
                   variant="secondary"
@@ -329,9 +290,7 @@ function Areas() {
           id="add-area"
           variant="secondary"
           onClick={() => {
-            const number = nextFreeAreaNumber(
-              (getValues('areas') ?? []).map((area) => area.number),
-            );
+            const number = lowestFreeNumber((getValues('areas') ?? []).map((area) => area.number));
             append({ number, name: '' }, { focusName: `areas.${fields.length}.name` });
             setAnnouncement(`Area ${number} added.`);
           }}
@@ -351,7 +310,6 @@ export function SystemForm({ siteId }: { siteId: string }) {
   const system = useSystem(siteId);
   const [unplacedMessages, setUnplacedMessages] = useState<string[]>([]);
   const [savedMessage, setSavedMessage] = useState('');
-  const [isReloading, setIsReloading] = useState(false);
   const form = useForm<SystemFormValues, unknown, SystemFormOutput>({
     resolver: zodResolver(saveSystemSchema),
     defaultValues: toFormValues(system.data),
@@ -364,14 +322,14 @@ export function SystemForm({ siteId }: { siteId: string }) {
   } = form;
   const psuType = useWatch({ control, name: 'psuType' });
   const { isDirty } = form.formState;
-  const savedVersion = system.data?.version ?? null;
 
-  // A newer version reached the cache (a refetch, another tab): show it unless typing would be lost.
-  useEffect(() => {
-    if (!isDirty && form.getValues('version') !== savedVersion) {
-      form.reset(toFormValues(system.data));
-    }
-  }, [form, isDirty, savedVersion, system.data]);
+  useShowNewerSavedVersion({
+    form,
+    versionField: 'version',
+    saved: system.data,
+    savedVersion: system.data?.version ?? null,
+    toFormValues,
+  });
 
   const saveSystem = useSaveSystem({
     onSuccess: (saved) => {
@@ -390,19 +348,14 @@ export function SystemForm({ siteId }: { siteId: string }) {
     saveSystem.mutate({ siteId, values });
   });
 
-  const reloadLatest = async () => {
-    setIsReloading(true);
-    try {
-      const latest = await system.refetch();
-      if (latest.isSuccess) {
-        form.reset(toFormValues(latest.data));
-        saveSystem.reset();
-        setSavedMessage('Showing the latest saved system.');
-      }
-    } finally {
-      setIsReloading(false);
+  const { isReloading, reloadLatest } = useReloadLatest(async () => {
+    const latest = await system.refetch();
+    if (latest.isSuccess) {
+      form.reset(toFormValues(latest.data));
+      saveSystem.reset();
+      setSavedMessage('Showing the latest saved system.');
     }
-  };
+  });
 
   return (
     <FormProvider {...form}>
@@ -419,7 +372,7 @@ export function SystemForm({ siteId }: { siteId: string }) {
           fieldErrorCount={countFieldErrors(errors)}
           error={saveSystem.error}
           unplacedMessages={unplacedMessages}
-          onReloadLatest={() => void reloadLatest()}
+          onReloadLatest={reloadLatest}
           isReloading={isReloading}
         />
 
@@ -569,20 +522,11 @@ export function SystemForm({ siteId }: { siteId: string }) {
           <Areas />
         </Card>
 
-        <div className="flex flex-wrap items-center gap-4">
-          <Button type="submit" disabled={saveSystem.isPending}>
-            <Save aria-hidden="true" className="size-4" />
-            {saveSystem.isPending ? 'Saving…' : 'Save system'}
-          </Button>
-          <p role="status" className="flex items-center gap-1.5 text-sm font-medium text-normal">
-            {savedMessage && !isDirty ? (
-              <>
-                <CircleCheck aria-hidden="true" className="size-4" />
-                {savedMessage}
-              </>
-            ) : null}
-          </p>
-        </div>
+        <SaveRow
+          saveLabel="Save system"
+          isSaving={saveSystem.isPending}
+          savedMessage={isDirty ? '' : savedMessage}
+        />
       </form>
     </FormProvider>
   );

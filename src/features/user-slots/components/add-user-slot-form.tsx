@@ -4,17 +4,15 @@ import {
   type CreateUserSlotInput,
   type UserSlot,
 } from '@server/user-slots/schema';
-import { useEffect, useState } from 'react';
-import { FormProvider, useForm } from 'react-hook-form';
+import { useState } from 'react';
+import { useForm } from 'react-hook-form';
 import type { z } from 'zod';
 
-import { Button } from '@/components/ui/button';
-import { FormProblem } from '@/components/ui/form-problem';
-import { LoadingStatus } from '@/components/ui/loading-status';
+import { InPlaceRecordForm } from '@/components/forms/in-place-record-form';
 import { useCreateUserSlot } from '@/features/user-slots/api/create-user-slot';
 import { UserSlotFields } from '@/features/user-slots/components/user-slot-fields';
 import { isUserSlotField } from '@/features/user-slots/components/user-slot-form-values';
-import { applyServerFieldErrors, countFieldErrors } from '@/lib/form-errors';
+import { applyServerFieldErrors } from '@/lib/form-errors';
 
 type AddUserSlotFormProps = {
   siteId: string;
@@ -52,40 +50,24 @@ export function AddUserSlotForm({
         setUnplacedMessages(applyServerFieldErrors(error, form.setError, isUserSlotField)),
     },
   });
-  const { setFocus } = form;
-
-  useEffect(() => setFocus('holderName'), [setFocus]);
 
   return (
-    <FormProvider {...form}>
-      <form
-        noValidate
-        aria-labelledby={headingId}
-        onSubmit={form.handleSubmit((data) => {
-          setUnplacedMessages([]);
-          createUserSlot.mutate({ siteId, data });
-        })}
-        className="grid gap-5"
-      >
-        <FormProblem
-          subject="The slot"
-          fieldErrorCount={
-            form.formState.submitCount > 0 ? countFieldErrors(form.formState.errors) : 0
-          }
-          error={createUserSlot.error}
-          unplacedMessages={unplacedMessages}
-        />
-        <UserSlotFields showSlotNumber accessLevel={canChooseLevel ? 'choose' : 'user-only'} />
-        <div className="flex flex-wrap items-center gap-3">
-          <Button type="submit" size="lg" disabled={createUserSlot.isPending}>
-            Save slot
-          </Button>
-          <Button variant="secondary" size="lg" onClick={onCancel}>
-            Cancel
-          </Button>
-          {createUserSlot.isPending ? <LoadingStatus label="Saving" /> : null}
-        </div>
-      </form>
-    </FormProvider>
+    <InPlaceRecordForm
+      form={form}
+      headingId={headingId}
+      firstField="holderName"
+      onSubmit={(data) => {
+        setUnplacedMessages([]);
+        createUserSlot.mutate({ siteId, data });
+      }}
+      subject="The slot"
+      error={createUserSlot.error}
+      unplacedMessages={unplacedMessages}
+      saveLabel="Save slot"
+      isSaving={createUserSlot.isPending}
+      onCancel={onCancel}
+    >
+      <UserSlotFields showSlotNumber accessLevel={canChooseLevel ? 'choose' : 'user-only'} />
+    </InPlaceRecordForm>
   );
 }

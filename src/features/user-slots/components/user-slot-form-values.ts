@@ -1,5 +1,7 @@
 import type { CreateUserSlotInput } from '@server/user-slots/schema';
 
+import { isUnderFields } from '@/lib/form-errors';
+
 /** What the add and edit forms hold while someone types. */
 export type UserSlotFormValues = CreateUserSlotInput;
 
@@ -13,8 +15,7 @@ const userSlotFieldNames: ReadonlyArray<string> = [
 ] satisfies ReadonlyArray<keyof UserSlotFormValues>;
 
 /** Whether an API error path ("areaNumbers.1") names a field the slot forms show. */
-export const isUserSlotField = (fieldPath: string) =>
-  userSlotFieldNames.includes(fieldPath.split('.')[0] ?? '');
+export const isUserSlotField = isUnderFields(userSlotFieldNames);
 
 /** "1, 3" → [1, 3]; anything that is not a number stays NaN so the schema can object. */
 export function parseAreaNumbers(value: unknown): unknown {

@@ -1,10 +1,12 @@
 import type { UserSlot } from '@server/user-slots/schema';
 import { CircleCheck, CircleSlash, Pencil, RotateCcw } from 'lucide-react';
 import { useQueryClient } from '@tanstack/react-query';
-import { useEffect, useId, useRef, useState, type ReactNode } from 'react';
+import { useRef } from 'react';
 
+import { InPlaceFormSection } from '@/components/forms/in-place-form-section';
 import { Button } from '@/components/ui/button';
 import { ConfirmButton } from '@/components/ui/confirm-button';
+import { DetailItem } from '@/components/ui/detail-item';
 import { ProblemAlert } from '@/components/ui/problem-alert';
 import { getUserSlotsQueryKey } from '@/features/user-slots/api/get-user-slots';
 import { useDeleteUserSlot } from '@/features/user-slots/api/delete-user-slot';
@@ -12,6 +14,7 @@ import { useUpdateUserSlot } from '@/features/user-slots/api/update-user-slot';
 import { EditUserSlotForm } from '@/features/user-slots/components/edit-user-slot-form';
 import { ACCESS_LEVEL_LABELS } from '@/features/user-slots/components/user-slot-form-values';
 import { formatCalendarDate } from '@/lib/dates';
+import { useInPlaceForm } from '@/lib/use-in-place-form';
 import { formatDateTime } from '@/utils/format';
 
 type UserSlotItemProps = {
@@ -21,15 +24,6 @@ type UserSlotItemProps = {
   announce: (message: string) => void;
   onDeleted: (slot: UserSlot) => void;
 };
-
-function Detail({ term, children }: { term: string; children: ReactNode }) {
-  return (
-    <div className="min-w-0">
-      <dt className="text-sm text-ink-muted">{term}</dt>
-      <dd className="break-words">{children}</dd>
-    </div>
-  );
-}
 
 function describeValidity(slot: UserSlot): string {
   if (slot.validFrom && slot.validTo) {
@@ -42,23 +36,8 @@ function describeValidity(slot: UserSlot): string {
 
 export function UserSlotItem({ siteId, slot, isStaff, announce, onDeleted }: UserSlotItemProps) {
   const queryClient = useQueryClient();
-  const [isEditing, setIsEditing] = useState(false);
   const editButtonRef = useRef<HTMLButtonElement>(null);
-  const returnFocusToEdit = useRef(false);
-
-  // Closing the form removes the field that had focus; carry on from the Edit button instead.
-  useEffect(() => {
-    if (!isEditing && returnFocusToEdit.current) {
-      returnFocusToEdit.current = false;
-      editButtonRef.current?.focus();
-    }
-  }, [isEditing]);
-
-  const closeEditor = () => {
-    returnFocusToEdit.current = true;
-    setIsEditing(false);
-  };
-  const editHeadingId = useId();
+  const { isOpen: isEditing, open: openEditor, close: closeEditor } = useInPlaceForm(editButtonRef);
   const label = `slot ${slot.slot} (${slot.holderName})`;
 
   const setActive = useUpdateUserSlot({
@@ -76,6 +55,8 @@ export function UserSlotItem({ siteId, slot, isStaff, announce, onDeleted }: Use
       },
     },
   });
+  const recordActive = (active: boolean) =>
+    setActive.mutate({ siteId, slotId: slot.id, data: { active, version: slot.version } });
   const deleteUserSlot = useDeleteUserSlot({
     mutationConfig: { onSuccess: () => onDeleted(slot) },
   });
@@ -101,39 +82,38 @@ export function UserSlotItem({ siteId, slot, isStaff, announce, onDeleted }: Use
       </div>
 
       {isEditing ? (
-        <section aria-labelledby={editHeadingId} className="grid gap-3">
-          <h4 id={editHeadingId} className="font-semibold">
-            Change slot {slot.slot}
-          </h4>
-          <EditUserSlotForm
-            siteId={siteId}
-            slot={slot}
-            headingId={editHeadingId}
-            canChooseLevel={isStaff}
-            onSaved={(saved) => {
-              closeEditor();
-              announce(`Saved slot ${saved.slot}.`);
-            }}
-            onCancel={closeEditor}
-          />
-        </section>
+        <InPlaceFormSection title={`Change slot ${slot.slot}`} headingLevel={4}>
+          {(headingId) => (
+            <EditUserSlotForm
+              siteId={siteId}
+              slot={slot}
+              headingId={headingId}
+              canChooseLevel={isStaff}
+              onSaved={(saved) => {
+                closeEditor();
+                announce(`Saved slot ${saved.slot}.`);
+              }}
+              onCancel={closeEditor}
+            />
+          )}
+        </InPlaceFormSection>
       ) : (
         <dl className="grid gap-x-6 gap-y-3 sm:grid-cols-2 lg:grid-cols-4">
-          <Detail term="Access level">
+          <DetailItem term="Access level">
             {ACCESS_LEVEL_LABELS[slot.accessLevel] ?? `Level ${slot.accessLevel}`}
-          </Detail>
-          <Detail term="Areas">
+          </DetailItem>
+          <DetailItem term="Areas">
             {slot.areaNumbers.length > 0 ? (
               <span className="font-mono">{slot.areaNumbers.join(', ')}</span>
             ) : (
               'Not recorded'
             )}
-          </Detail>
-          <Detail term="Valid">{describeValidity(slot)}</Detail>
-          <Detail term="Last changed">
+          </DetailItem>
+          <DetailItem term="Valid">{describeValidity(slot)}</DetailItem>
+          <DetailItem term="Last changed">
             {slot.changedBy ?? 'Wardbook'},{' '}
             <time dateTime={slot.changedAt}>{formatDateTime(slot.changedAt)}</time>
-          </Detail>
+          </DetailItem>
         </dl>
       )}
 
@@ -141,12 +121,7 @@ export function UserSlotItem({ siteId, slot, isStaff, announce, onDeleted }: Use
 
       {isEditing ? null : (
         <div className="flex flex-wrap gap-2">
-          <Button
-            ref={editButtonRef}
-            variant="secondary"
-            size="lg"
-            onClick={() => setIsEditing(true)}
-          >
+          <Button ref={editButtonRef} variant="secondary" size="lg" onClick={openEditor}>
             <Pencil aria-hidden="true" className="size-5" />
             Edit <span className="sr-only">{label}</span>
           </Button>
@@ -157,13 +132,7 @@ export function UserSlotItem({ siteId, slot, isStaff, announce, onDeleted }: Use
               confirmLabel="Yes, deactivate"
               cancelLabel="Keep it active"
               pending={setActive.isPending}
-              onConfirm={() =>
-                setActive.mutate({
-                  siteId,
-                  slotId: slot.id,
-                  data: { active: false, version: slot.version },
-                })
-              }
+              onConfirm={() => recordActive(false)}
             >
               <CircleSlash aria-hidden="true" className="size-5" />
               Deactivate <span className="sr-only">{label}</span>
@@ -173,13 +142,7 @@ export function UserSlotItem({ siteId, slot, isStaff, announce, onDeleted }: Use
               variant="secondary"
               size="lg"
               disabled={setActive.isPending}
-              onClick={() =>
-                setActive.mutate({
-                  siteId,
-                  slotId: slot.id,
-                  data: { active: true, version: slot.version },
-                })
-              }
+              onClick={() => recordActive(true)}
             >
               <RotateCcw aria-hidden="true" className="size-5" />
               Reactivate <span className="sr-only">{label}</span>

@@ -1,48 +1,26 @@
-import type { UserSlot } from '@server/user-slots/schema';
-import { KeyRound, Plus, ShieldCheck } from 'lucide-react';
-import { useEffect, useId, useRef, useState } from 'react';
+import { KeyRound, ShieldCheck } from 'lucide-react';
+import { useRef, useState } from 'react';
 
-import { Button } from '@/components/ui/button';
+import { AddInPlace } from '@/components/forms/add-in-place';
 import { Card } from '@/components/ui/card';
 import { LiveMessage } from '@/components/ui/live-message';
 import { Notice } from '@/components/ui/notice';
 import { useUserSlots } from '@/features/user-slots/api/get-user-slots';
 import { AddUserSlotForm } from '@/features/user-slots/components/add-user-slot-form';
 import { UserSlotItem } from '@/features/user-slots/components/user-slot-item';
+import { lowestFreeNumber } from '@/lib/lowest-free-number';
 
 /** Installer staff may record engineer slots and delete records; homeowners name and deactivate. */
 export type UserSlotViewer = 'engineer' | 'office' | 'homeowner';
 
 type UserSlotsPanelProps = { siteId: string; viewer: UserSlotViewer };
 
-function nextFreeSlot(slots: readonly UserSlot[]): number {
-  const used = new Set(slots.map((slot) => slot.slot));
-  let candidate = 1;
-  while (used.has(candidate)) candidate += 1;
-  return candidate;
-}
-
 /** Who holds each user-code slot on the control panel, and never the codes themselves. */
 export function UserSlotsPanel({ siteId, viewer }: UserSlotsPanelProps) {
   const { data: slots } = useUserSlots(siteId);
-  const [isAdding, setIsAdding] = useState(false);
-  const [message, setMessage] = useState('');
-  const addHeadingId = useId();
   const addButtonRef = useRef<HTMLButtonElement>(null);
-  const focusAddButton = useRef(false);
+  const [message, setMessage] = useState('');
   const isStaff = viewer !== 'homeowner';
-
-  useEffect(() => {
-    if (!isAdding && focusAddButton.current) {
-      focusAddButton.current = false;
-      addButtonRef.current?.focus();
-    }
-  }, [isAdding]);
-
-  const closeAddForm = () => {
-    focusAddButton.current = true;
-    setIsAdding(false);
-  };
 
   return (
     <Card title="User-code slots" icon={KeyRound} flush>
@@ -78,31 +56,25 @@ export function UserSlotsPanel({ siteId, viewer }: UserSlotsPanelProps) {
         <p className="px-4 py-4 text-ink-muted md:px-5">No slots are recorded yet.</p>
       )}
 
-      <div className="border-t border-hairline bg-paper px-4 py-5 md:px-5">
-        {isAdding ? (
-          <section aria-labelledby={addHeadingId} className="grid gap-4">
-            <h3 id={addHeadingId} className="text-lg font-semibold">
-              New user-code slot
-            </h3>
-            <AddUserSlotForm
-              siteId={siteId}
-              headingId={addHeadingId}
-              canChooseLevel={isStaff}
-              suggestedSlot={nextFreeSlot(slots)}
-              onAdded={(added) => {
-                setMessage(`Slot ${added.slot} recorded for ${added.holderName}.`);
-                closeAddForm();
-              }}
-              onCancel={closeAddForm}
-            />
-          </section>
-        ) : (
-          <Button ref={addButtonRef} size="lg" onClick={() => setIsAdding(true)}>
-            <Plus aria-hidden="true" className="size-5" />
-            Add user-code slot
-          </Button>
+      <AddInPlace
+        addLabel="Add user-code slot"
+        formTitle="New user-code slot"
+        addButtonRef={addButtonRef}
+      >
+        {({ headingId, close }) => (
+          <AddUserSlotForm
+            siteId={siteId}
+            headingId={headingId}
+            canChooseLevel={isStaff}
+            suggestedSlot={lowestFreeNumber(slots.map((slot) => slot.slot))}
+            onAdded={(added) => {
+              setMessage(`Slot ${added.slot} recorded for ${added.holderName}.`);
+              close();
+            }}
+            onCancel={close}
+          />
         )}
-      </div>
+      </AddInPlace>
       <LiveMessage message={message} />
     </Card>
   );

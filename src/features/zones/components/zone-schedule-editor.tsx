@@ -1,14 +1,14 @@
-import { useEffect, useState, type ReactNode } from 'react';
+import { useState, type ReactNode } from 'react';
 import { zodResolver } from '@hookform/resolvers/zod';
-import { CircleCheck, CircleDot, Plus, RotateCcw, Save } from 'lucide-react';
 import { FormProvider, useFieldArray, useForm } from 'react-hook-form';
 import type { z } from 'zod';
 
 import type { ZoneSchedule } from '@server/zones/schema';
-import { Button } from '@/components/ui/button';
-import { FieldErrorMessage } from '@/components/ui/form-field';
+import { EditableRowList } from '@/components/forms/editable-row';
+import { ListSaveBar } from '@/components/forms/list-save-bar';
+import { useRowListFocus } from '@/components/forms/use-row-list-focus';
 import { FormProblem } from '@/components/ui/form-problem';
-import { rowActionIds } from '@/components/ui/row-action-ids';
+import { LiveMessage } from '@/components/ui/live-message';
 import { saveZonesSchema, useSaveZones } from '@/features/zones/api/save-zones';
 import { useZones } from '@/features/zones/api/get-zones';
 import { ZoneRow } from '@/features/zones/components/zone-row';
@@ -20,10 +20,11 @@ import {
   type ZoneScheduleFormValues,
 } from '@/features/zones/utils/zone-form-values';
 import { nextFreeZoneNumber } from '@/features/zones/utils/zone-numbers';
-import { zoneRowHeadingId, zoneRowSentenceName } from '@/features/zones/utils/zone-row-names';
+import { ZONE_ROW_KIND, zoneRowSentenceName } from '@/features/zones/utils/zone-row-names';
 import { applyServerFieldErrors, countFieldErrors } from '@/lib/form-errors';
+import { useReloadLatest } from '@/lib/use-reload-latest';
+import { useShowNewerSavedVersion } from '@/lib/use-show-newer-saved-version';
 import { useUnsavedChangesGuard } from '@/lib/use-unsaved-changes-guard';
-import { useFocusAfterRender } from '@/lib/use-focus-after-render';
 
 const ADD_ZONE_ID = 'add-zone';
 
@@ -48,19 +49,24 @@ function ZoneScheduleForm({
   });
   const { control, getValues, formState } = form;
   const { fields, append, insert, move, remove } = useFieldArray({ control, name: 'zones' });
-  const focusAfterRender = useFocusAfterRender();
+  const { moveRow, removeRow } = useRowListFocus({
+    fields,
+    move,
+    remove,
+    rowKind: ZONE_ROW_KIND,
+    addButtonId: ADD_ZONE_ID,
+  });
   const [announcement, setAnnouncement] = useState('');
   const [unplacedMessages, setUnplacedMessages] = useState<string[]>([]);
-  const [isReloading, setIsReloading] = useState(false);
   const { isDirty } = formState;
 
-  // Someone else's save reached the cache (another tab, a refetch): show it, unless this form
-  // holds typing that would be lost.
-  useEffect(() => {
-    if (!isDirty && getValues('zonesVersion') !== zonesVersion) {
-      form.reset(toScheduleFormValues(schedule, zonesVersion));
-    }
-  }, [form, getValues, isDirty, schedule, zonesVersion]);
+  useShowNewerSavedVersion({
+    form,
+    versionField: 'zonesVersion',
+    saved: schedule,
+    savedVersion: zonesVersion,
+    toFormValues: toScheduleFormValues,
+  });
 
   const saveZones = useSaveZones({
     onSuccess: (saved) => {
@@ -100,43 +106,34 @@ function ZoneScheduleForm({
     );
   };
 
+  // Named before the rows change, while the index still points at the zone meant.
+  const rowName = (index: number) =>
+    zoneRowSentenceName(getValues(`zones.${index}.number`), index + 1);
+
   const moveZone = (index: number, to: number) => {
-    const field = fields[index];
-    if (!field) return;
-    const name = zoneRowSentenceName(getValues(`zones.${index}.number`), index + 1);
-    move(index, to);
-    const ids = rowActionIds(`zone-${field.id}`);
-    // Keep focus on the button pressed; at the top or bottom it is disabled, so use the other.
-    focusAfterRender(...(to < index ? [ids.up, ids.down] : [ids.down, ids.up]));
+    const name = rowName(index);
+    if (!moveRow(index, to)) return;
     setAnnouncement(`${name} moved ${to < index ? 'up' : 'down'} to row ${to + 1}.`);
   };
 
   const removeZone = (index: number) => {
-    const name = zoneRowSentenceName(getValues(`zones.${index}.number`), index + 1);
-    const neighbour = fields[index + 1] ?? fields[index - 1];
-    remove(index);
-    focusAfterRender(neighbour ? zoneRowHeadingId(neighbour.id) : ADD_ZONE_ID);
+    const name = rowName(index);
+    removeRow(index);
     setAnnouncement(`${name} removed. Save the schedule to make it final.`);
   };
 
-  const reloadLatest = async () => {
-    setIsReloading(true);
-    try {
-      const latest = await onReloadLatest();
-      if (latest && latest.zonesVersion !== null) {
-        form.reset(toScheduleFormValues(latest, latest.zonesVersion));
-        saveZones.reset();
-        setAnnouncement('Showing the latest saved schedule.');
-      }
-    } finally {
-      setIsReloading(false);
+  const { isReloading, reloadLatest } = useReloadLatest(async () => {
+    const latest = await onReloadLatest();
+    if (latest && latest.zonesVersion !== null) {
+      form.reset(toScheduleFormValues(latest, latest.zonesVersion));
+      saveZones.reset();
+      setAnnouncement('Showing the latest saved schedule.');
     }
-  };
+  });
 
   useUnsavedChangesGuard(isDirty && !saveZones.isPending);
 
   const zoneErrors = formState.errors.zones;
-  const isSaved = !isDirty && saveZones.isSuccess;
 
   return (
     <FormProvider {...form}>
@@ -147,72 +144,47 @@ function ZoneScheduleForm({
           fieldErrorCount={countFieldErrors(formState.errors)}
           error={saveZones.error}
           unplacedMessages={unplacedMessages}
-          onReloadLatest={() => void reloadLatest()}
+          onReloadLatest={reloadLatest}
           isReloading={isReloading}
         />
 
-        {fields.length === 0 ? (
-          <p className="rounded-lg border border-dashed border-hairline bg-white px-4 py-6 text-center text-ink-muted">
-            No zones yet. Add the first zone, then save the schedule.
-          </p>
-        ) : (
-          <ol aria-label="Zone schedule" className="grid gap-3">
-            {fields.map((field, index) => (
-              <ZoneRow
-                key={field.id}
-                index={index}
-                rowCount={fields.length}
-                rowKey={field.id}
-                areas={schedule.areas}
-                onMoveUp={() => moveZone(index, index - 1)}
-                onMoveDown={() => moveZone(index, index + 1)}
-                onDuplicate={() => duplicateZone(index)}
-                onRemove={() => removeZone(index)}
-              />
-            ))}
-          </ol>
-        )}
-        <FieldErrorMessage message={zoneErrors?.message ?? zoneErrors?.root?.message} />
+        <EditableRowList
+          label="Zone schedule"
+          rowCount={fields.length}
+          emptyMessage="No zones yet. Add the first zone, then save the schedule."
+          error={zoneErrors?.message ?? zoneErrors?.root?.message}
+        >
+          {fields.map((field, index) => (
+            <ZoneRow
+              key={field.id}
+              index={index}
+              rowCount={fields.length}
+              rowKey={field.id}
+              areas={schedule.areas}
+              onMoveUp={() => moveZone(index, index - 1)}
+              onMoveDown={() => moveZone(index, index + 1)}
+              onDuplicate={() => duplicateZone(index)}
+              onRemove={() => removeZone(index)}
+            />
+          ))}
+        </EditableRowList>
 
-        <div className="flex flex-wrap items-center gap-3 rounded-lg border border-hairline bg-white px-4 py-3">
-          <Button id={ADD_ZONE_ID} variant="secondary" onClick={addZone}>
-            <Plus aria-hidden="true" className="size-4" />
-            Add zone
-          </Button>
-          <Button type="submit" disabled={saveZones.isPending}>
-            <Save aria-hidden="true" className="size-4" />
-            {saveZones.isPending ? 'Saving…' : 'Save schedule'}
-          </Button>
-          <Button
-            variant="secondary"
-            disabled={!isDirty || saveZones.isPending}
-            onClick={() => {
-              form.reset();
-              setAnnouncement('Changes discarded: showing the saved schedule.');
-            }}
-          >
-            <RotateCcw aria-hidden="true" className="size-4" />
-            Discard changes
-          </Button>
-          <p className="ml-auto flex items-center gap-1.5 text-sm">
-            <span className="font-mono font-semibold">{fields.length}</span>
-            {fields.length === 1 ? 'zone' : 'zones'}
-            {isDirty ? (
-              <span className="ml-2 inline-flex items-center gap-1 font-medium text-fault-text">
-                <CircleDot aria-hidden="true" className="size-4" />
-                Unsaved changes
-              </span>
-            ) : isSaved ? (
-              <span className="ml-2 inline-flex items-center gap-1 font-medium text-normal">
-                <CircleCheck aria-hidden="true" className="size-4" />
-                Saved
-              </span>
-            ) : null}
-          </p>
-        </div>
-        <p role="status" className="sr-only">
-          {announcement}
-        </p>
+        <ListSaveBar
+          addButtonId={ADD_ZONE_ID}
+          addLabel="Add zone"
+          onAdd={addZone}
+          saveLabel="Save schedule"
+          isSaving={saveZones.isPending}
+          hasUnsavedChanges={isDirty}
+          isSaved={!isDirty && saveZones.isSuccess}
+          onDiscard={() => {
+            form.reset();
+            setAnnouncement('Changes discarded: showing the saved schedule.');
+          }}
+          rowCount={fields.length}
+          rowNoun={['zone', 'zones']}
+        />
+        <LiveMessage message={announcement} />
       </form>
     </FormProvider>
   );

@@ -5,7 +5,8 @@ export function zoneRowName(number: unknown, row: number): string {
     : `the zone in row ${row}`;
 }
 
-export const zoneRowHeadingId = (rowKey: string) => `zone-${rowKey}-heading`;
+/** What a zone row's ids start with: "zone-<key>-heading" (see `editableRowIds`). */
+export const ZONE_ROW_KIND = 'zone';
 
 /** The same name at the start of a sentence, for announcements. */
 export function zoneRowSentenceName(number: unknown, row: number): string {

@@ -1,14 +1,14 @@
 import type { QueryClient } from '@tanstack/react-query';
-import { Link, useParams, type LoaderFunctionArgs } from 'react-router-dom';
+import { useParams, type LoaderFunctionArgs } from 'react-router-dom';
 
-import { Notice } from '@/components/ui/notice';
-import { paths } from '@/config/paths';
+import { SectionAfterCautions } from '@/components/layouts/section-after-cautions';
 import { getDevicesQueryOptions } from '@/features/devices/api/get-devices';
 import { DeviceListEditor } from '@/features/devices/components/device-list-editor';
 import { useSite } from '@/features/sites/api/get-site';
 import { useSiteRole } from '@/features/sites/utils/use-site-role';
 import { getSystemQueryOptions, useSystem } from '@/features/systems/api/get-system';
 import { PanelSafetyCard } from '@/features/systems/components/panel-safety-card';
+import { RecordSystemFirstNotice } from '@/features/systems/components/record-system-first-notice';
 import { InstallationSafetyCard } from '@/features/zones/components/installation-safety-card';
 
 export function createLoader(queryClient: QueryClient) {
@@ -32,39 +32,23 @@ export function Component() {
   return (
     <>
       <title>{`Devices · ${site.name} · Wardbook`}</title>
-      {/* Cautions first in reading order: they are for before the ladder and the drill. */}
-      <div className="mb-6 grid gap-6 lg:grid-cols-2">
-        <InstallationSafetyCard />
-        <PanelSafetyCard />
-      </div>
-      <section aria-labelledby="devices-heading" className="grid gap-6">
-        <div>
-          <h2 id="devices-heading" className="text-xl font-semibold">
-            Devices
-          </h2>
-          <p className="max-w-prose text-sm text-ink-muted">
-            Keypads, sounders, zone expanders, communicators and remote power supplies as fitted,
-            with the currents they draw for the power budget. Nothing is kept until you save.
-          </p>
-        </div>
+      <SectionAfterCautions
+        cautions={
+          <>
+            <InstallationSafetyCard />
+            <PanelSafetyCard />
+          </>
+        }
+        headingId="devices-heading"
+        title="Devices"
+        description="Keypads, sounders, zone expanders, communicators and remote power supplies as fitted, with the currents they draw for the power budget. Nothing is kept until you save."
+      >
         <DeviceListEditor
           siteId={siteId}
           areas={system?.areas ?? []}
-          noSystemNotice={
-            <Notice tone="info" title="Record the control panel on the System tab first">
-              <p>
-                Devices belong to a system and its areas.{' '}
-                <Link
-                  to={paths.sites.workspace.getHref(role, siteId, 'system')}
-                  className="font-semibold text-ink"
-                >
-                  Go to the System tab
-                </Link>
-              </p>
-            </Notice>
-          }
+          noSystemNotice={<RecordSystemFirstNotice role={role} siteId={siteId} records="Devices" />}
         />
-      </section>
+      </SectionAfterCautions>
     </>
   );
 }
