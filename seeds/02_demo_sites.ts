@@ -95,6 +95,9 @@ export async function seed(knex: Knex, context: SeedContext = {}): Promise<void>
               : 'Cupboard under the stairs',
           psu_type: 'A',
           battery_ah: plan.zones > 16 ? 17 : 7,
+          panel_grade: plan.grade,
+          panel_quiescent_ma: plan.zones > 16 ? 180 : 110,
+          panel_alarm_ma: plan.zones > 16 ? 260 : 160,
           notification: plan.monitored ? 'C' : 'A',
           mains_failure_signalled: plan.monitored,
         })

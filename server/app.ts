@@ -14,7 +14,9 @@ import { createHomesRouter } from './homes/routes';
 import { requestLogger } from './http/logger';
 import { apiNotFound, problemHandler } from './http/problem-handler';
 import { securityHeaders } from './http/security-headers';
+import { createCalculatorsRouter } from './calculators/routes';
 import { createChangeRequestsRouter } from './change-requests/routes';
+import { createCommissioningRouter } from './commissioning/routes';
 import { createDevicesRouter } from './devices/routes';
 import { createFilesRouter } from './files/routes';
 import type { FileStorage } from './files/storage';
@@ -101,6 +103,8 @@ export function createApp(deps: AppDeps): Express {
   app.use(createFilesRouter(records));
   app.use(createChangeRequestsRouter(records));
   app.use(createMyRouter(records));
+  app.use(createCalculatorsRouter());
+  app.use(createCommissioningRouter(records));
   app.use('/api', apiNotFound);
 
   // --- The single-page app answers every other GET ---------------------------------------------

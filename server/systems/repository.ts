@@ -11,11 +11,21 @@ interface SystemRow {
   battery_ah: string | null;
   notification: 'A' | 'B' | 'C' | 'D' | 'E' | 'F' | null;
   mains_failure_signalled: boolean;
+  panel_grade: number | null;
+  panel_quiescent_ma: string | null;
+  panel_alarm_ma: string | null;
+  sounder_minutes: number;
+  standby_hours_override: string | null;
+  resistor_tolerance: string;
+  cable_core: '7/0.2' | '16/0.2';
+  supply_volts: string;
   version: number;
   zones_version: number;
   devices_version: number;
   updated_at: Date;
 }
+
+const decimal = (value: string | null) => (value === null ? null : Number(value));
 
 export function findSystemRow(db: Knex, siteId: string) {
   return db<SystemRow>('systems').where({ site_id: siteId }).first();
@@ -44,6 +54,14 @@ export async function getSystemRecord(db: Knex, siteId: string): Promise<SystemR
     batteryAh: system.battery_ah === null ? null : Number(system.battery_ah),
     notification: system.notification,
     mainsFailureSignalled: system.mains_failure_signalled,
+    panelGrade: system.panel_grade,
+    panelQuiescentMa: decimal(system.panel_quiescent_ma),
+    panelAlarmMa: decimal(system.panel_alarm_ma),
+    sounderMinutes: system.sounder_minutes,
+    standbyHoursOverride: decimal(system.standby_hours_override),
+    resistorTolerance: Number(system.resistor_tolerance),
+    cableCore: system.cable_core,
+    supplyVolts: Number(system.supply_volts),
     signallingPaths: paths.map((path) => ({
       id: path.id,
       position: path.position,

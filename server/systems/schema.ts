@@ -1,9 +1,11 @@
 import { z } from 'zod';
-import { idSchema, trimmed, versionSchema } from '../schema/fields';
+import { gradeSchema, idSchema, milliampsSchema, trimmed, versionSchema } from '../schema/fields';
 
 export const PSU_TYPES = ['A', 'B', 'C'] as const;
 export const NOTIFICATION_OPTIONS = ['A', 'B', 'C', 'D', 'E', 'F'] as const;
 export const BEARERS = ['ip', 'cellular', 'pstn', 'radio'] as const;
+export const RESISTOR_TOLERANCES = [0.01, 0.02, 0.05, 0.1] as const;
+export const CABLE_CORES = ['7/0.2', '16/0.2'] as const;
 
 export const signallingPathSchema = z
   .object({
@@ -39,6 +41,35 @@ export const saveSystemSchema = z
       .default(null),
     notification: z.enum(NOTIFICATION_OPTIONS).nullable().default(null),
     mainsFailureSignalled: z.boolean().default(false),
+    panelGrade: gradeSchema.nullable().default(null),
+    panelQuiescentMa: milliampsSchema.nullable().default(null),
+    panelAlarmMa: milliampsSchema.nullable().default(null),
+    sounderMinutes: z
+      .number({ error: 'Enter the sounder cut-off in minutes.' })
+      .int('Whole minutes, please.')
+      .min(1, 'At least 1 minute.')
+      .max(20, 'External sounders must stop within 20 minutes.')
+      .default(15),
+    standbyHoursOverride: z
+      .number()
+      .positive('Standby time must be more than 0 hours.')
+      .max(240, 'More than 240 hours is not a standby time.')
+      .nullable()
+      .default(null),
+    resistorTolerance: z
+      .union(
+        RESISTOR_TOLERANCES.map((tolerance) => z.literal(tolerance)),
+        {
+          error: 'Choose ±1 %, ±2 %, ±5 % or ±10 %.',
+        },
+      )
+      .default(0.05),
+    cableCore: z.enum(CABLE_CORES).default('7/0.2'),
+    supplyVolts: z
+      .number()
+      .min(9, 'Supplies run from 9 V.')
+      .max(30, 'Supplies run up to 30 V.')
+      .default(13.7),
     signallingPaths: z
       .array(signallingPathSchema)
       .max(4, 'At most four signalling paths.')
@@ -95,6 +126,14 @@ export const systemSchema = z.object({
   batteryAh: z.number().nullable(),
   notification: z.enum(NOTIFICATION_OPTIONS).nullable(),
   mainsFailureSignalled: z.boolean(),
+  panelGrade: z.number().nullable(),
+  panelQuiescentMa: z.number().nullable(),
+  panelAlarmMa: z.number().nullable(),
+  sounderMinutes: z.number(),
+  standbyHoursOverride: z.number().nullable(),
+  resistorTolerance: z.number(),
+  cableCore: z.enum(CABLE_CORES),
+  supplyVolts: z.number(),
   signallingPaths: z.array(
     z.object({
       id: z.string(),

@@ -28,6 +28,14 @@ export async function saveSystem(
     battery_ah: fields.batteryAh,
     notification: fields.notification,
     mains_failure_signalled: fields.mainsFailureSignalled,
+    panel_grade: fields.panelGrade,
+    panel_quiescent_ma: fields.panelQuiescentMa,
+    panel_alarm_ma: fields.panelAlarmMa,
+    sounder_minutes: fields.sounderMinutes,
+    standby_hours_override: fields.standbyHoursOverride,
+    resistor_tolerance: fields.resistorTolerance,
+    cable_core: fields.cableCore,
+    supply_volts: fields.supplyVolts,
   };
 
   await db.transaction(async (trx) => {

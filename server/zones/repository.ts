@@ -17,6 +17,8 @@ export async function listZones(db: Knex, systemId: string): Promise<Zone[]> {
     tamperOhms: row.tamper_ohms,
     alarmOhms: row.alarm_ohms,
     coreMap: row.core_map,
+    cableMetres: decimal(row.cable_metres),
+    coresPerLeg: row.cores_per_leg,
     areaId: row.area_id,
     attributes: row.attributes,
     grade: row.grade,

@@ -142,6 +142,18 @@ export const zoneInputSchema = z
     tamperOhms: resistorOhmsSchema.nullable().default(null),
     alarmOhms: resistorOhmsSchema.nullable().default(null),
     coreMap: z.array(coreConnectionSchema).max(12).default([]),
+    cableMetres: z
+      .number({ error: 'Enter the cable run in metres.' })
+      .min(0, 'A cable run cannot be negative.')
+      .max(2000, 'That is over 2 km; enter the run in metres.')
+      .nullable()
+      .default(null),
+    coresPerLeg: z
+      .number()
+      .int()
+      .min(1, 'At least one core per leg.')
+      .max(4, 'At most four cores doubled up per leg.')
+      .default(1),
     ...fittedComponentFields,
     attributes: z.array(z.enum(ZONE_ATTRIBUTES)).max(ZONE_ATTRIBUTES.length).default([]),
   })
@@ -221,6 +233,8 @@ export const zoneSchema = z.object({
   tamperOhms: z.number().nullable(),
   alarmOhms: z.number().nullable(),
   coreMap: z.array(z.object({ colour: z.enum(CORE_COLOURS), terminal: z.string() })),
+  cableMetres: z.number().nullable(),
+  coresPerLeg: z.number(),
   ...fittedComponentRecordFields,
   attributes: z.array(z.enum(ZONE_ATTRIBUTES)),
 });

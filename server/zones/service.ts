@@ -29,6 +29,8 @@ const zoneColumns = (zone: ZoneInput) => ({
   tamper_ohms: zone.tamperOhms,
   alarm_ohms: zone.alarmOhms,
   core_map: JSON.stringify(zone.coreMap),
+  cable_metres: zone.cableMetres,
+  cores_per_leg: zone.coresPerLeg,
   area_id: zone.areaId,
   attributes: zone.attributes,
   grade: zone.grade,

@@ -424,6 +424,109 @@ const MATRIX: Record<string, Entry> = {
       body: { status: 'closed' },
     }),
   },
+  'POST /api/calc/resistance': {
+    allowed: STAFF,
+    scoped: false,
+    call: async () => ({ path: '/api/calc/resistance', body: { value: '2K2' } }),
+  },
+  'POST /api/calc/loop': {
+    allowed: STAFF,
+    scoped: false,
+    call: async () => ({
+      path: '/api/calc/loop',
+      body: { wiring: 'two_resistor', tamperOhms: '2k2', alarmOhms: '4k7', reading: '2200' },
+    }),
+  },
+  'POST /api/calc/cable': {
+    allowed: STAFF,
+    scoped: false,
+    call: async () => ({
+      path: '/api/calc/cable',
+      body: { core: '7/0.2', runMetres: 50, currentMa: 30 },
+    }),
+  },
+  'POST /api/calc/power-budget': {
+    allowed: STAFF,
+    scoped: false,
+    call: async () => ({
+      path: '/api/calc/power-budget',
+      body: {
+        items: [{ label: 'Panel', quiescentMa: 100, alarmMa: 200 }],
+        grade: 2,
+        psuType: 'A',
+        batteryAh: 7,
+      },
+    }),
+  },
+  'POST /api/calc/grade': {
+    allowed: STAFF,
+    scoped: false,
+    call: async () => ({
+      path: '/api/calc/grade',
+      body: { components: [{ label: 'Panel', grade: 3 }] },
+    }),
+  },
+  'GET /api/sites/:siteId/engineering': {
+    allowed: STAFF,
+    scoped: true,
+    call: async (target) => ({ path: `/api/sites/${site(target).siteId}/engineering` }),
+  },
+  'GET /api/sites/:siteId/commissioning': {
+    allowed: STAFF,
+    scoped: true,
+    call: async (target) => ({ path: `/api/sites/${site(target).siteId}/commissioning` }),
+  },
+  'GET /api/sites/:siteId/pre-issue-check': {
+    allowed: STAFF,
+    scoped: true,
+    call: async (target) => ({ path: `/api/sites/${site(target).siteId}/pre-issue-check` }),
+  },
+  'POST /api/sites/:siteId/walk-tests': {
+    allowed: STAFF,
+    scoped: true,
+    call: async (target) => ({
+      path: `/api/sites/${site(target).siteId}/walk-tests`,
+      body: {
+        clientKey: crypto.randomUUID(),
+        zoneId: site(target).zoneIds[0],
+        secureReading: '2k2',
+        activated: true,
+      },
+    }),
+  },
+  'POST /api/sites/:siteId/siting-checks': {
+    allowed: STAFF,
+    scoped: true,
+    call: async (target) => ({
+      path: `/api/sites/${site(target).siteId}/siting-checks`,
+      body: {
+        clientKey: crypto.randomUUID(),
+        zoneId: site(target).zoneIds[0],
+        answers: {
+          not_facing_windows: true,
+          away_from_heat: true,
+          out_of_direct_sun: true,
+          away_from_draughts: true,
+          clear_of_insects_and_pets: true,
+          height_and_angle: true,
+        },
+      },
+    }),
+  },
+  'POST /api/sites/:siteId/system-tests': {
+    allowed: STAFF,
+    scoped: true,
+    call: async (target) => ({
+      path: `/api/sites/${site(target).siteId}/system-tests`,
+      body: {
+        clientKey: crypto.randomUUID(),
+        kind: 'sounders',
+        internalSounded: true,
+        externalSounded: true,
+        strobeFlashed: true,
+      },
+    }),
+  },
   'GET /api/my/homes': {
     allowed: ['homeowner'],
     scoped: false,
