@@ -36,8 +36,8 @@ export default tseslint.config(
         {
           patterns: [
             {
-              regex: '^@server/(?!schema/|[a-z-]+/schema$)',
-              message: 'Import only server/**/schema.ts or server/schema/* into the client.',
+              regex: '^@server/(?!schema/|calc/|[a-z-]+/schema$)',
+              message: 'Import only server/**/schema.ts, server/schema/* or the pure server/calc/* into the client.',
             },
           ],
         },
