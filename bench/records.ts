@@ -16,6 +16,7 @@ import { createLocalDiskStorage } from '../server/files/storage';
 import { createLogger } from '../server/http/logger';
 import { createSmtpMailer } from '../server/mail/mailer';
 import { repoRoot } from '../server/paths';
+import { benchCalculations } from './calculations';
 import { load, median, type LoadResult } from './lib/load';
 
 /**
@@ -67,10 +68,20 @@ export async function seedBenchData(database: {
        from generate_series(1, :sites) g`,
     { installer: installer.id, centre: centre.id, sites: SITES },
   );
-  await db.raw(`insert into systems (site_id, control_panel) select id, 'Bench panel' from sites`);
   await db.raw(
-    `insert into zones (system_id, position, number, location, zone_type, detector_kind, loop_wiring, tamper_ohms, alarm_ohms)
-     select sy.id, z, z, 'Room ' || z, 'instant', 'pir', 'two_resistor', 2200, 4700
+    `insert into systems (site_id, control_panel, psu_type, battery_ah, panel_grade, panel_quiescent_ma, panel_alarm_ma, mains_failure_signalled)
+     select id, 'Bench panel', 'A', case when required_grade = 2 then 7 else 17 end, required_grade, 120, 200, monitoring_centre_id is not null
+       from sites`,
+  );
+  await db.raw(
+    `insert into devices (system_id, position, kind, location, quiescent_ma, alarm_ma)
+     select sy.id, d.position, d.kind, d.location, d.quiescent, d.alarm
+       from systems sy,
+            (values (1, 'keypad', 'Hall', 40, 60), (2, 'external_sounder', 'Front elevation', 25, 450)) as d(position, kind, location, quiescent, alarm)`,
+  );
+  await db.raw(
+    `insert into zones (system_id, position, number, location, zone_type, detector_kind, loop_wiring, tamper_ohms, alarm_ohms, quiescent_ma, alarm_ma)
+     select sy.id, z, z, 'Room ' || z, 'instant', 'pir', 'two_resistor', 2200, 4700, 15, 25
        from systems sy, generate_series(1, :zones) z`,
     { zones: ZONES_PER_SITE },
   );
@@ -239,6 +250,7 @@ export async function benchRecords() {
     for (const [url, count] of Object.entries(statements)) {
       console.log(`  ${url.replace(siteId, ':id')}: ${count.knex} + ${count.session}`);
     }
+    await benchCalculations(database);
   } finally {
     for (const child of children) child.kill('SIGTERM');
     await dropDatabase(postgres, name);
