@@ -37,7 +37,8 @@ export default tseslint.config(
           patterns: [
             {
               regex: '^@server/(?!schema/|calc/|[a-z-]+/schema$)',
-              message: 'Import only server/**/schema.ts, server/schema/* or the pure server/calc/* into the client.',
+              message:
+                'Import only server/**/schema.ts, server/schema/* or the pure server/calc/* into the client.',
             },
           ],
         },

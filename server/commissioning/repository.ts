@@ -15,13 +15,13 @@ interface WalkTestRow {
   note: string;
   tested_by_name: string | null;
   tested_at: Date;
-  failures?: string[];
+  failures: string[];
 }
 
 const ohms = (value: string | null, open: boolean) =>
   open ? null : value === null ? null : Number(value);
 
-export function toWalkTest(row: WalkTestRow, failures: string[] = []): WalkTest {
+export function toWalkTest(row: WalkTestRow): WalkTest {
   return {
     id: row.id,
     zoneId: row.zone_id,
@@ -31,7 +31,7 @@ export function toWalkTest(row: WalkTestRow, failures: string[] = []): WalkTest 
     alarmState: row.alarm_state,
     activated: row.activated,
     passed: row.passed,
-    failures,
+    failures: row.failures,
     note: row.note,
     testedBy: row.tested_by_name,
     testedAt: row.tested_at.toISOString(),

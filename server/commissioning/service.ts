@@ -137,6 +137,7 @@ export async function recordWalkTest(
         alarm_state: alarm?.state ?? null,
         activated: input.activated,
         passed: failures.length === 0,
+        failures: JSON.stringify(failures),
         note: input.note,
         tested_by: actor.actorUserId,
         tested_at: testedAt,
@@ -154,7 +155,7 @@ export async function recordWalkTest(
   });
   return {
     created: true,
-    walkTest: toWalkTest({ ...row, tested_by_name: actor.actorLabel ?? null }, failures),
+    walkTest: toWalkTest({ ...row, tested_by_name: actor.actorLabel ?? null }),
   };
 }
 
