@@ -93,7 +93,22 @@ function siteRoutes(queryClient: QueryClient): RouteObject[] {
           path: 'files',
           lazy: screen(queryClient, () => import('@/app/routes/app/sites/site-files')),
         },
+        {
+          path: 'commissioning',
+          lazy: screen(queryClient, () => import('@/app/routes/app/sites/site-commissioning')),
+        },
       ],
+    },
+  ];
+}
+
+// Engineers and office staff: the site record, and the calculators the record's checks use.
+function staffRoutes(queryClient: QueryClient): RouteObject[] {
+  return [
+    ...siteRoutes(queryClient),
+    {
+      path: paths.calculators.path,
+      lazy: screen(queryClient, () => import('@/app/routes/app/calculators')),
     },
   ];
 }
@@ -135,8 +150,8 @@ function myHomeRoutes(queryClient: QueryClient): RouteObject[] {
 }
 
 const roleSubRoutes: Partial<Record<Role, (queryClient: QueryClient) => RouteObject[]>> = {
-  engineer: siteRoutes,
-  office: siteRoutes,
+  engineer: staffRoutes,
+  office: staffRoutes,
   homeowner: myHomeRoutes,
 };
 

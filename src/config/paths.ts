@@ -2,7 +2,14 @@ import type { Role } from '@/types/api';
 
 /** Roles that work on the installer's site records. */
 export type SiteRole = 'engineer' | 'office';
-export const SITE_SECTIONS = ['system', 'zones', 'devices', 'people', 'files'] as const;
+export const SITE_SECTIONS = [
+  'system',
+  'zones',
+  'devices',
+  'people',
+  'files',
+  'commissioning',
+] as const;
 export type SiteSection = (typeof SITE_SECTIONS)[number];
 export const MY_HOME_SECTIONS = ['zones', 'keyholders', 'user-codes', 'files', 'request'] as const;
 export type MyHomeSection = (typeof MY_HOME_SECTIONS)[number];
@@ -40,6 +47,11 @@ export const paths = {
       getHref: (role: SiteRole, siteId: string, section?: SiteSection) =>
         `/${role}/sites/${encodeURIComponent(siteId)}${section ? `/${section}` : ''}`,
     },
+  },
+  // The engineering calculators, for engineers and office staff alike.
+  calculators: {
+    path: 'calculators',
+    getHref: (role: SiteRole) => `/${role}/calculators`,
   },
   // A homeowner's own site, phone-first.
   myHome: {

@@ -1,5 +1,7 @@
+import type { ReactNode } from 'react';
 import { CircleCheck, Siren, TriangleAlert, Unplug, Zap, type LucideIcon } from 'lucide-react';
 
+import { formatOhms, formatOhmsRange } from '@/lib/loop-readings';
 import { cn } from '@/utils/cn';
 
 export type LoopReadingState = 'short' | 'normal' | 'alarm' | 'open' | 'out-of-tolerance';
@@ -28,12 +30,6 @@ const stateStyles: Record<LoopReadingState, { bar: string; text: string; icon: L
   open: { bar: 'bg-fault', text: 'text-fault-text', icon: Unplug },
   'out-of-tolerance': { bar: 'bg-paper-deep', text: 'text-fault-text', icon: TriangleAlert },
 };
-
-function formatOhms(ohms: number): string {
-  if (ohms >= 1_000_000) return `${Number((ohms / 1_000_000).toPrecision(3))} MΩ`;
-  if (ohms >= 1_000) return `${Number((ohms / 1_000).toPrecision(3))} kΩ`;
-  return `${Math.round(ohms)} Ω`;
-}
 
 export function LoopStateBadge({ state }: { state: LoopReadingState }) {
   const style = stateStyles[state];
@@ -114,44 +110,67 @@ function locateReading(segments: readonly Segment[], readingOhms: number) {
 
 // Both ends share the unit of the upper one, so a range stays short: "3.8–5.6 kΩ".
 function describeBand(segment: Segment): string {
-  if (segment.toOhms === null) return `over ${formatOhms(segment.fromOhms)}`;
-  const [divisor, unit] =
-    segment.toOhms >= 1_000_000
-      ? [1_000_000, 'MΩ']
-      : segment.toOhms >= 1_000
-        ? [1_000, 'kΩ']
-        : [1, 'Ω'];
-  const scaled = (ohms: number) => Number((ohms / divisor).toPrecision(3));
-  return `${scaled(segment.fromOhms)}–${scaled(segment.toOhms)} ${unit}`;
+  return formatOhmsRange(segment.fromOhms, segment.toOhms);
 }
 
 type LoopGaugeProps = {
   bands: readonly LoopGaugeBand[];
-  readingOhms: number;
+  /** The measured reading (Infinity for a meter's OL); without one the gauge shows the bands only. */
+  readingOhms?: number | null;
+  /** Said after the reading's state in the caption: how far inside its band, what was expected. */
+  readingNote?: ReactNode;
+  /**
+   * Whether the caption lists every band in words. Off where the bands are already written out
+   * beside the gauge, so they are not read (or matched) twice.
+   */
+  bandsInCaption?: boolean;
   className?: string;
 };
+
+/** Every band in words, lowest first: "Short circuit 0–40 Ω; Normal 2.09–2.34 kΩ; …". */
+function bandsInWords(segments: readonly Segment[]): string {
+  return segments
+    .filter((segment) => segment.state !== 'out-of-tolerance')
+    .map((segment) => `${stateNames[segment.state]} ${describeBand(segment)}`)
+    .join('; ');
+}
 
 /**
  * Wardbook's loop gauge: a resistance scale with the short / normal / alarm / open bands and the
  * measured reading marked. The drawing is hidden from screen readers; the caption says it in words.
  */
-export function LoopGauge({ bands, readingOhms, className }: LoopGaugeProps) {
+export function LoopGauge({
+  bands,
+  readingOhms = null,
+  readingNote,
+  bandsInCaption = true,
+  className,
+}: LoopGaugeProps) {
   const segments = layOutSegments(bands);
-  const reading = locateReading(segments, readingOhms);
-  const readingSegment = segments.find((segment) => segment.state === reading.state);
+  const measured = readingOhms !== null && !Number.isNaN(readingOhms) ? readingOhms : null;
+  const reading = measured === null ? null : locateReading(segments, measured);
+  const readingSegment = reading
+    ? segments.find((segment) => segment.state === reading.state)
+    : undefined;
 
   return (
-    <figure className={cn('w-full', className)}>
-      <div aria-hidden="true" className="relative pt-8">
-        <div
-          className="absolute top-0 flex -translate-x-1/2 flex-col items-center"
-          style={{ left: `${reading.percent}%` }}
-        >
-          <span className="rounded bg-ink px-1.5 py-0.5 font-mono text-xs font-semibold text-paper">
-            {formatOhms(readingOhms)}
-          </span>
-          <span className="h-5 w-0.5 bg-ink" />
-        </div>
+    // With no reading and the bands written out beside it, the drawing adds nothing to say.
+    <figure
+      aria-hidden={reading === null && !bandsInCaption ? true : undefined}
+      className={cn('w-full', className)}
+    >
+      <div aria-hidden="true" className={cn('relative', reading ? 'pt-8' : 'pt-1')}>
+        {reading && measured !== null ? (
+          <div
+            className="absolute top-0 flex -translate-x-1/2 flex-col items-center"
+            style={{ left: `${reading.percent}%` }}
+          >
+            <span className="rounded bg-ink px-1.5 py-0.5 font-mono text-xs font-semibold whitespace-nowrap text-paper">
+              {Number.isFinite(measured) ? formatOhms(measured) : 'OL'}
+            </span>
+            <span className="h-5 w-0.5 bg-ink" />
+          </div>
+        ) : null}
         <div className="flex h-3 overflow-hidden rounded-full border border-hairline">
           {segments.map((segment) => (
             <div
@@ -171,7 +190,7 @@ export function LoopGauge({ bands, readingOhms, className }: LoopGaugeProps) {
               {segment.state === 'out-of-tolerance' ? null : (
                 <>
                   <span className="block font-medium">{shortStateNames[segment.state]}</span>
-                  <span className="block font-mono text-[0.6875rem] text-ink-muted">
+                  <span className="block font-mono text-[0.6875rem] break-words text-ink-muted">
                     {describeBand(segment)}
                   </span>
                 </>
@@ -180,13 +199,21 @@ export function LoopGauge({ bands, readingOhms, className }: LoopGaugeProps) {
           ))}
         </div>
       </div>
-      <figcaption className="mt-3 text-sm">
-        Reading <span className="font-mono font-semibold">{formatOhms(readingOhms)}</span>:{' '}
-        <LoopStateBadge state={reading.state} />
-        {readingSegment && reading.state !== 'out-of-tolerance'
-          ? ` (band ${describeBand(readingSegment)})`
-          : null}
-      </figcaption>
+      {reading && measured !== null ? (
+        <figcaption className="mt-3 text-sm">
+          Reading <span className="font-mono font-semibold">{formatOhms(measured)}</span>:{' '}
+          <LoopStateBadge state={reading.state} />
+          {readingSegment && reading.state !== 'out-of-tolerance'
+            ? ` (band ${describeBand(readingSegment)})`
+            : null}
+          {readingNote ? <> {readingNote}</> : null}
+          {bandsInCaption ? (
+            <span className="sr-only">. Bands: {bandsInWords(segments)}.</span>
+          ) : null}
+        </figcaption>
+      ) : bandsInCaption ? (
+        <figcaption className="sr-only">Expected bands: {bandsInWords(segments)}.</figcaption>
+      ) : null}
     </figure>
   );
 }

@@ -1,5 +1,5 @@
 import { Suspense } from 'react';
-import { Building2, House } from 'lucide-react';
+import { Building2, Calculator, House } from 'lucide-react';
 import { Outlet } from 'react-router-dom';
 
 import type { NavigationItem } from '@/components/layouts/navigation';
@@ -10,12 +10,15 @@ import { paths } from '@/config/paths';
 import { useMe } from '@/features/auth/api/get-me';
 import { AccountBar } from '@/features/auth/components/account-bar';
 import { roleEntries } from '@/features/auth/utils/role-grants';
+import { useRenewSession } from '@/features/auth/utils/use-renew-session';
+import { OutboxSender } from '@/features/commissioning/components/outbox-sender';
 import { roleHomeHref, roleLabels, useRoleInView } from '@/lib/roles';
 
 /** Frame for engineer, office and operator pages: header, left navigation, wide content. */
 export function WorkspaceLayoutRoute() {
   const { data: me } = useMe();
   const roleInView = useRoleInView();
+  const renewSession = useRenewSession(me?.user.id);
 
   // Only after sign-out has cleared the cache, while the browser is leaving for the provider.
   if (!me) {
@@ -38,6 +41,11 @@ export function WorkspaceLayoutRoute() {
       icon: Building2,
       exact: false,
     });
+    navigation.push({
+      label: 'Calculators',
+      href: paths.calculators.getHref(current.role),
+      icon: Calculator,
+    });
   }
 
   return (
@@ -56,6 +64,10 @@ export function WorkspaceLayoutRoute() {
       }
       navigation={navigation}
     >
+      {/* Commissioning tests saved without a connection go as soon as one is back. */}
+      {current?.role === 'engineer' || current?.role === 'office' ? (
+        <OutboxSender userId={me.user.id} renewSession={renewSession} />
+      ) : null}
       <Suspense fallback={<LoadingStatus label="Loading page" />}>
         <Outlet />
       </Suspense>

@@ -4,6 +4,7 @@ import type { z } from 'zod';
 import { deviceListSchema, saveDevicesSchema } from '@server/devices/schema';
 import { apiRequest } from '@/lib/api-client';
 import type { MutationConfig } from '@/lib/query-client';
+import { refreshSiteChecks } from '@/lib/refresh-site-checks';
 import { siteQueryKeys } from '@/lib/site-query-keys';
 
 export { saveDevicesSchema };
@@ -32,6 +33,8 @@ export function useSaveDevices(
       queryClient.setQueryData(siteQueryKeys.section(variables.siteId, 'devices'), devices);
       // The device count shows in the site's header.
       void queryClient.invalidateQueries({ queryKey: siteQueryKeys.detail(variables.siteId) });
+      // The power budget, grade and pre-issue check count the devices.
+      refreshSiteChecks(queryClient, variables.siteId);
       return onSuccess?.(devices, variables, ...rest);
     },
   });

@@ -1,9 +1,9 @@
 import { Users } from 'lucide-react';
 
 import { Card } from '@/components/ui/card';
+import { EngineerSafetyCard } from '@/components/ui/engineer-safety-card';
 import { PageHeading } from '@/components/ui/page-heading';
 import { useRoleHome } from '@/features/homes/api/get-role-home';
-import { EngineerSafetyCard } from '@/features/homes/components/engineer-safety-card';
 import { OrganisationCard } from '@/features/homes/components/organisation-card';
 import { PeopleTable } from '@/features/homes/components/people-table';
 

@@ -4,6 +4,7 @@ import type { z } from 'zod';
 import { siteDetailSchema, type SiteDetail, type updateSiteSchema } from '@server/sites/schema';
 import { apiRequest } from '@/lib/api-client';
 import type { MutationConfig } from '@/lib/query-client';
+import { refreshSiteChecks } from '@/lib/refresh-site-checks';
 import { siteQueryKeys } from '@/lib/site-query-keys';
 
 export type UpdateSiteValues = z.output<typeof updateSiteSchema>;
@@ -28,6 +29,8 @@ export function useUpdateSite(
     onSuccess: (site, ...rest) => {
       queryClient.setQueryData(siteQueryKeys.detail(site.id), site);
       void queryClient.invalidateQueries({ queryKey: siteQueryKeys.lists() });
+      // The required grade, class and police response feed the engineering and pre-issue checks.
+      refreshSiteChecks(queryClient, site.id);
       return onSuccess?.(site, ...rest);
     },
   });

@@ -35,6 +35,7 @@ export function SiteSectionTabs({ role, site }: { role: SiteRole; site: SiteDeta
       count: counts.files,
       countLabel: plural(counts.files, 'file', 'files'),
     },
+    { label: 'Commissioning', href: href('commissioning') },
   ];
   return <SectionTabs label="Site sections" tabs={tabs} />;
 }

@@ -4,6 +4,7 @@ import type { z } from 'zod';
 import { saveSystemSchema, systemResponseSchema, type SystemRecord } from '@server/systems/schema';
 import { apiRequest } from '@/lib/api-client';
 import type { MutationConfig } from '@/lib/query-client';
+import { refreshSiteChecks } from '@/lib/refresh-site-checks';
 import { siteQueryKeys } from '@/lib/site-query-keys';
 
 export { saveSystemSchema };
@@ -32,11 +33,16 @@ export function useSaveSystem(
       const { siteId } = variables;
       queryClient.setQueryData(siteQueryKeys.section(siteId, 'system'), system);
       // The zone schedule and device list hang on the system (its areas, and whether they can be
-      // edited at all). Neither is on screen now, and a route loader would happily hand back a
-      // stale copy, so drop them: the next visit fetches them afresh.
-      queryClient.removeQueries({ queryKey: siteQueryKeys.section(siteId, 'zones') });
-      queryClient.removeQueries({ queryKey: siteQueryKeys.section(siteId, 'devices') });
+      // edited at all). A route loader would happily hand back a stale copy, so copies nobody is
+      // watching are dropped and the next visit fetches them afresh; the system page's power
+      // budget watches them, so those are fetched again in place.
+      for (const section of ['zones', 'devices']) {
+        const queryKey = siteQueryKeys.section(siteId, section);
+        queryClient.removeQueries({ queryKey, type: 'inactive' });
+        void queryClient.invalidateQueries({ queryKey });
+      }
       void queryClient.invalidateQueries({ queryKey: siteQueryKeys.detail(siteId) });
+      refreshSiteChecks(queryClient, siteId);
       return onSuccess?.(system, variables, ...rest);
     },
   });

@@ -1,13 +1,17 @@
 import { useState } from 'react';
 import { zodResolver } from '@hookform/resolvers/zod';
-import { Cpu, Layers, Plus, Radio, Trash2, Zap } from 'lucide-react';
+import { Cable, Cpu, Layers, Plus, Radio, Trash2, Zap } from 'lucide-react';
 import { FormProvider, useFieldArray, useForm, useFormContext, useWatch } from 'react-hook-form';
 import type { z } from 'zod';
 
+import { DEFAULT_SOUNDER_MINUTES, MAX_SOUNDER_MINUTES } from '@server/calc/power';
+import { GRADES } from '@server/schema/fields';
 import {
   BEARERS,
+  CABLE_CORES,
   NOTIFICATION_OPTIONS,
   PSU_TYPES,
+  RESISTOR_TOLERANCES,
   saveSystemSchema,
   type SystemRecord,
 } from '@server/systems/schema';
@@ -28,7 +32,7 @@ import { RowActions } from '@/components/ui/row-actions';
 import { useSystem } from '@/features/systems/api/get-system';
 import { useSaveSystem } from '@/features/systems/api/save-system';
 import { applyServerFieldErrors, countFieldErrors } from '@/lib/form-errors';
-import { numberOrNull, textOrNull } from '@/lib/form-values';
+import { numberOrNull, numberOrUndefined, textOrNull } from '@/lib/form-values';
 import { lowestFreeNumber } from '@/lib/lowest-free-number';
 import { useFocusAfterRender } from '@/lib/use-focus-after-render';
 import { useReloadLatest } from '@/lib/use-reload-latest';
@@ -57,6 +61,14 @@ function toFormValues(system: SystemRecord | null): SystemFormValues {
       batteryAh: null,
       notification: null,
       mainsFailureSignalled: false,
+      panelGrade: null,
+      panelQuiescentMa: null,
+      panelAlarmMa: null,
+      sounderMinutes: DEFAULT_SOUNDER_MINUTES,
+      standbyHoursOverride: null,
+      resistorTolerance: 0.05,
+      cableCore: '7/0.2',
+      supplyVolts: 13.7,
       signallingPaths: [],
       areas: [],
       version: null,
@@ -70,6 +82,14 @@ function toFormValues(system: SystemRecord | null): SystemFormValues {
     batteryAh: system.batteryAh,
     notification: system.notification,
     mainsFailureSignalled: system.mainsFailureSignalled,
+    panelGrade: system.panelGrade,
+    panelQuiescentMa: system.panelQuiescentMa,
+    panelAlarmMa: system.panelAlarmMa,
+    sounderMinutes: system.sounderMinutes,
+    standbyHoursOverride: system.standbyHoursOverride,
+    resistorTolerance: system.resistorTolerance as SystemFormValues['resistorTolerance'],
+    cableCore: system.cableCore,
+    supplyVolts: system.supplyVolts,
     signallingPaths: system.signallingPaths.map((path) => ({
       bearer: path.bearer,
       atsCategory: path.atsCategory,
@@ -417,6 +437,62 @@ export function SystemForm({ siteId }: { siteId: string }) {
                 />
               )}
             </FormField>
+            <FormField
+              label="Panel grade"
+              hint="The EN 50131 grade on the panel's label. The system's grade is its lowest part's."
+              error={errors.panelGrade?.message}
+            >
+              {(control) => (
+                <select
+                  {...control}
+                  {...register('panelGrade', { setValueAs: numberOrNull })}
+                  className={selectClassName({ className: 'max-w-56' })}
+                >
+                  <option value="">Not recorded</option>
+                  {GRADES.map((grade) => (
+                    <option key={grade} value={grade}>
+                      Grade {grade}
+                    </option>
+                  ))}
+                </select>
+              )}
+            </FormField>
+            <FormField
+              label="Panel quiescent current (mA)"
+              hint="What the panel itself draws when all is quiet, from its data sheet."
+              optional
+              error={errors.panelQuiescentMa?.message}
+            >
+              {(control) => (
+                <input
+                  {...control}
+                  {...register('panelQuiescentMa', { setValueAs: numberOrNull })}
+                  type="number"
+                  step="any"
+                  min="0"
+                  inputMode="decimal"
+                  className={inputClassName({ mono: true, className: 'max-w-32' })}
+                />
+              )}
+            </FormField>
+            <FormField
+              label="Panel current in alarm (mA)"
+              hint="What the panel draws in alarm, without the sounders listed as devices."
+              optional
+              error={errors.panelAlarmMa?.message}
+            >
+              {(control) => (
+                <input
+                  {...control}
+                  {...register('panelAlarmMa', { setValueAs: numberOrNull })}
+                  type="number"
+                  step="any"
+                  min="0"
+                  inputMode="decimal"
+                  className={inputClassName({ mono: true, className: 'max-w-32' })}
+                />
+              )}
+            </FormField>
           </div>
         </Card>
 
@@ -472,6 +548,64 @@ export function SystemForm({ siteId }: { siteId: string }) {
                 />
               )}
             </FormField>
+            <FormField
+              label="Supply voltage (V)"
+              hint="The charging voltage at the panel's detector supply terminals, usually 13.7 V."
+              error={errors.supplyVolts?.message}
+            >
+              {(control) => (
+                <input
+                  {...control}
+                  {...register('supplyVolts', { setValueAs: numberOrUndefined })}
+                  type="number"
+                  step="0.1"
+                  min="9"
+                  max="30"
+                  inputMode="decimal"
+                  className={inputClassName({ mono: true, className: 'max-w-32' })}
+                />
+              )}
+            </FormField>
+            <FormField
+              label="Sounder cut-off (minutes)"
+              hint={`How long the sounders ring in alarm: 1 to ${MAX_SOUNDER_MINUTES} minutes, as external sounders must stop within ${MAX_SOUNDER_MINUTES}. ${DEFAULT_SOUNDER_MINUTES} is usual. The power budget counts this time in alarm.`}
+              error={errors.sounderMinutes?.message}
+            >
+              {(control) => (
+                <input
+                  {...control}
+                  {...register('sounderMinutes', { setValueAs: numberOrUndefined })}
+                  type="number"
+                  step="1"
+                  min="1"
+                  max={MAX_SOUNDER_MINUTES}
+                  inputMode="numeric"
+                  className={inputClassName({ mono: true, className: 'max-w-32' })}
+                />
+              )}
+            </FormField>
+            <FormField
+              label="Standby time override (hours)"
+              optional
+              hint={
+                psuType === 'B' || psuType === 'C'
+                  ? `Needed for a type ${psuType} supply: its standby time is not in Wardbook's table, so enter the time the site's specification requires. Without it there is no power budget.`
+                  : "Needed for type B and C supplies, whose standby time is not in Wardbook's table. Leave empty for type A: the EN 50131-6 period for the site's grade is used."
+              }
+              error={errors.standbyHoursOverride?.message}
+            >
+              {(control) => (
+                <input
+                  {...control}
+                  {...register('standbyHoursOverride', { setValueAs: numberOrNull })}
+                  type="number"
+                  step="any"
+                  min="0"
+                  inputMode="decimal"
+                  className={inputClassName({ mono: true, className: 'max-w-32' })}
+                />
+              )}
+            </FormField>
             <div className="md:col-span-2">
               <label className="flex min-h-10 items-start gap-3">
                 <input
@@ -489,6 +623,49 @@ export function SystemForm({ siteId }: { siteId: string }) {
                 </span>
               </label>
             </div>
+          </div>
+        </Card>
+
+        <Card title="Loops and cable" icon={Cable} headingLevel={3}>
+          <div className="grid gap-4 md:grid-cols-2">
+            <FormField
+              label="Resistor tolerance"
+              hint="Of the end-of-line resistors fitted throughout (gold band ±5 %, brown ±1 %). It widens every zone's expected readings."
+              error={errors.resistorTolerance?.message}
+            >
+              {(control) => (
+                <select
+                  {...control}
+                  {...register('resistorTolerance', { setValueAs: numberOrUndefined })}
+                  className={selectClassName({ className: 'max-w-56' })}
+                >
+                  {RESISTOR_TOLERANCES.map((tolerance) => (
+                    <option key={tolerance} value={tolerance}>
+                      ±{Math.round(tolerance * 100)} %
+                    </option>
+                  ))}
+                </select>
+              )}
+            </FormField>
+            <FormField
+              label="Cable core"
+              hint="The alarm cable's core build, for each zone's cable resistance and the volts at its detector."
+              error={errors.cableCore?.message}
+            >
+              {(control) => (
+                <select
+                  {...control}
+                  {...register('cableCore')}
+                  className={selectClassName({ className: 'max-w-56' })}
+                >
+                  {CABLE_CORES.map((core) => (
+                    <option key={core} value={core}>
+                      {core} mm
+                    </option>
+                  ))}
+                </select>
+              )}
+            </FormField>
           </div>
         </Card>
 

@@ -4,6 +4,7 @@ import type { z } from 'zod';
 import { saveZonesSchema, zoneScheduleSchema, type ZoneSchedule } from '@server/zones/schema';
 import { apiRequest } from '@/lib/api-client';
 import type { MutationConfig } from '@/lib/query-client';
+import { refreshSiteChecks } from '@/lib/refresh-site-checks';
 import { siteQueryKeys } from '@/lib/site-query-keys';
 
 export { saveZonesSchema };
@@ -35,6 +36,7 @@ export function useSaveZones(
       // The site's zone count shows in its header and in the list.
       void queryClient.invalidateQueries({ queryKey: siteQueryKeys.detail(variables.siteId) });
       void queryClient.invalidateQueries({ queryKey: siteQueryKeys.lists() });
+      refreshSiteChecks(queryClient, variables.siteId);
       return onSuccess?.(schedule, variables, ...rest);
     },
   });

@@ -25,14 +25,21 @@ import { labelInRow } from '@/components/forms/row-label';
 import { FieldErrorMessage } from '@/components/ui/form-field';
 import { checkboxClassName } from '@/components/ui/form-styles';
 import { CoreMapEditor } from '@/features/zones/components/core-map-editor';
-import { ExpectedReadingsNote } from '@/features/zones/components/expected-readings-note';
+import { ZoneLoopCheck } from '@/features/zones/components/zone-loop-check';
 import { resistorsFor } from '@/features/zones/utils/expected-readings';
 import { parseOhms } from '@/features/zones/utils/ohms';
 import type { ZoneScheduleFormValues } from '@/features/zones/utils/zone-form-values';
 import { ZONE_ROW_KIND, zoneRowName } from '@/features/zones/utils/zone-row-names';
-import { numberOrUndefined } from '@/lib/form-values';
+import { numberOrNull, numberOrUndefined } from '@/lib/form-values';
+import type { LoopSettings } from '@/lib/loop-readings';
 
-type ZoneRowProps = EditableRowPlace & { areas: ZoneSchedule['areas'] };
+type ZoneRowProps = EditableRowPlace & {
+  areas: ZoneSchedule['areas'];
+  /** The system's resistor tolerance and cable core, which every zone's bands depend on. */
+  loopSettings: LoopSettings;
+};
+
+const CORES_PER_LEG = [1, 2, 3, 4] as const;
 
 type ResistorFieldProps = {
   resistor: 'Tamper' | 'Alarm';
@@ -76,7 +83,7 @@ function ResistorField({ resistor, row, isTaken, error, control, name }: Resisto
  * One zone of the schedule as a compact block of fields. Every control's accessible name carries
  * the row ("Location, row 3"), so a screen reader can tell one row's fields from the next.
  */
-export function ZoneRow({ areas, ...place }: ZoneRowProps) {
+export function ZoneRow({ areas, loopSettings, ...place }: ZoneRowProps) {
   const { index, rowKey } = place;
   const {
     control,
@@ -84,7 +91,7 @@ export function ZoneRow({ areas, ...place }: ZoneRowProps) {
     setValue,
     formState: { errors },
   } = useFormContext<ZoneScheduleFormValues>();
-  const [number, location, loopWiring, tamperOhms, alarmOhms] = useWatch({
+  const [number, location, loopWiring, tamperOhms, alarmOhms, cableMetres, coresPerLeg] = useWatch({
     control,
     name: [
       `zones.${index}.number`,
@@ -92,6 +99,8 @@ export function ZoneRow({ areas, ...place }: ZoneRowProps) {
       `zones.${index}.loopWiring`,
       `zones.${index}.tamperOhms`,
       `zones.${index}.alarmOhms`,
+      `zones.${index}.cableMetres`,
+      `zones.${index}.coresPerLeg`,
     ],
   });
   const row = index + 1;
@@ -201,11 +210,42 @@ export function ZoneRow({ areas, ...place }: ZoneRowProps) {
         control={control}
         name={`${rowPath}.alarmOhms`}
       />
-      <ExpectedReadingsNote
+      <DenseNumberField
+        label="Cable run (m)"
+        accessibleLabel={labelInRow('Cable run (m)', row)}
+        error={rowErrors?.cableMetres?.message}
+        className="xl:col-span-2"
+        control={control}
+        name={`${rowPath}.cableMetres`}
+        registerOptions={{ setValueAs: numberOrNull }}
+        min={0}
+        max={2000}
+        step="any"
+        inputMode="decimal"
+      />
+      <DenseSelectField
+        label="Cores per leg"
+        accessibleLabel={labelInRow('Cores per leg', row)}
+        error={rowErrors?.coresPerLeg?.message}
+        className="xl:col-span-1"
+        control={control}
+        name={`${rowPath}.coresPerLeg`}
+        registerOptions={{ setValueAs: numberOrUndefined }}
+      >
+        {CORES_PER_LEG.map((cores) => (
+          <option key={cores} value={cores}>
+            {cores}
+          </option>
+        ))}
+      </DenseSelectField>
+      <ZoneLoopCheck
         wiring={loopWiring}
         tamperOhms={tamperOhms}
         alarmOhms={alarmOhms}
-        className="col-span-2 sm:col-span-4 xl:col-span-5"
+        cableMetres={cableMetres}
+        coresPerLeg={coresPerLeg}
+        settings={loopSettings}
+        className="col-span-2 sm:col-span-4 xl:col-span-12"
       />
 
       <AreaField

@@ -22,6 +22,7 @@ import {
 import { nextFreeZoneNumber } from '@/features/zones/utils/zone-numbers';
 import { ZONE_ROW_KIND, zoneRowSentenceName } from '@/features/zones/utils/zone-row-names';
 import { applyServerFieldErrors, countFieldErrors } from '@/lib/form-errors';
+import type { LoopSettings } from '@/lib/loop-readings';
 import { useReloadLatest } from '@/lib/use-reload-latest';
 import { useShowNewerSavedVersion } from '@/lib/use-show-newer-saved-version';
 import { useUnsavedChangesGuard } from '@/lib/use-unsaved-changes-guard';
@@ -32,6 +33,7 @@ const zoneCount = (count: number) => `${count} ${count === 1 ? 'zone' : 'zones'}
 
 type ZoneScheduleFormProps = {
   siteId: string;
+  loopSettings: LoopSettings;
   schedule: ZoneSchedule;
   zonesVersion: number;
   onReloadLatest: () => Promise<ZoneSchedule | undefined>;
@@ -39,6 +41,7 @@ type ZoneScheduleFormProps = {
 
 function ZoneScheduleForm({
   siteId,
+  loopSettings,
   schedule,
   zonesVersion,
   onReloadLatest,
@@ -161,6 +164,7 @@ function ZoneScheduleForm({
               rowCount={fields.length}
               rowKey={field.id}
               areas={schedule.areas}
+              loopSettings={loopSettings}
               onMoveUp={() => moveZone(index, index - 1)}
               onMoveDown={() => moveZone(index, index + 1)}
               onDuplicate={() => duplicateZone(index)}
@@ -192,6 +196,8 @@ function ZoneScheduleForm({
 
 type ZoneScheduleEditorProps = {
   siteId: string;
+  /** The system's resistor tolerance and cable core, for each zone's expected readings. */
+  loopSettings: LoopSettings;
   /** Shown instead of the editor until the system is recorded. */
   noSystemNotice: ReactNode;
 };
@@ -200,13 +206,18 @@ type ZoneScheduleEditorProps = {
  * The as-fitted zone schedule, edited as a whole and saved in one go with its version, so two
  * people editing at once cannot silently overwrite each other.
  */
-export function ZoneScheduleEditor({ siteId, noSystemNotice }: ZoneScheduleEditorProps) {
+export function ZoneScheduleEditor({
+  siteId,
+  loopSettings,
+  noSystemNotice,
+}: ZoneScheduleEditorProps) {
   const zones = useZones(siteId);
   const { zonesVersion } = zones.data;
   if (zonesVersion === null) return <>{noSystemNotice}</>;
   return (
     <ZoneScheduleForm
       siteId={siteId}
+      loopSettings={loopSettings}
       schedule={zones.data}
       zonesVersion={zonesVersion}
       onReloadLatest={async () => (await zones.refetch()).data}

@@ -8,7 +8,8 @@ const isResistor = (ohms: unknown): ohms is number =>
 
 /**
  * What a meter across the loop should read, from the resistor values alone. Nominal values only:
- * no cable resistance and no tolerance, which the engineering calculations (issue 4) will add.
+ * the bands with tolerance and cable resistance come from the calculation module (server/calc/loop),
+ * and the zone editor shows both, so the nominal figure can be checked against the resistors.
  *
  * - Two-resistor loop: the tamper resistor is in series and the alarm resistor sits across the
  *   alarm contact, so the closed contact reads the tamper value and the open one adds the two.

@@ -16,6 +16,8 @@ export function toZoneFormRow(zone: Zone): ZoneInput {
     tamperOhms: zone.tamperOhms,
     alarmOhms: zone.alarmOhms,
     coreMap: zone.coreMap.map((core) => ({ colour: core.colour, terminal: core.terminal })),
+    cableMetres: zone.cableMetres,
+    coresPerLeg: zone.coresPerLeg,
     areaId: zone.areaId,
     attributes: [...zone.attributes],
     grade: zone.grade,
@@ -37,8 +39,9 @@ export function toScheduleFormValues(
 const unchosen = '' as never;
 
 /**
- * A new row. Wiring, resistor values, area, grade and class usually run the same through an
- * installation, so they follow the row above; what the zone is and where is for the engineer.
+ * A new row. Wiring, resistor values, cores per leg, area, grade and class usually run the same
+ * through an installation, so they follow the row above; what the zone is, where, and how long
+ * its cable run is are for the engineer.
  */
 export function newZoneRow(number: number, previous?: ZoneInput): ZoneInput {
   return {
@@ -51,6 +54,9 @@ export function newZoneRow(number: number, previous?: ZoneInput): ZoneInput {
     tamperOhms: previous?.tamperOhms ?? null,
     alarmOhms: previous?.alarmOhms ?? null,
     coreMap: [],
+    // Each detector has its own run; the cable build usually follows the row above.
+    cableMetres: null,
+    coresPerLeg: previous?.coresPerLeg ?? 1,
     areaId: previous?.areaId ?? null,
     attributes: [],
     grade: previous?.grade ?? null,
@@ -67,7 +73,7 @@ export function duplicateZoneRow(source: ZoneInput, number: number): ZoneInput {
 }
 
 const shownZoneField =
-  /^zones\.\d+\.(number|location|zoneType|detectorKind|detectorModel|loopWiring|tamperOhms|alarmOhms|areaId|attributes|grade|environmentalClass|quiescentMa|alarmMa|coreMap|coreMap\.\d+\.(colour|terminal))$/;
+  /^zones\.\d+\.(number|location|zoneType|detectorKind|detectorModel|loopWiring|tamperOhms|alarmOhms|cableMetres|coresPerLeg|areaId|attributes|grade|environmentalClass|quiescentMa|alarmMa|coreMap|coreMap\.\d+\.(colour|terminal))$/;
 
 /** Field paths the editor shows beside a field; any other API message goes in the summary. */
 export function isZoneFieldShown(fieldPath: string): boolean {

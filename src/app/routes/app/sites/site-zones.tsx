@@ -4,6 +4,7 @@ import { useParams, type LoaderFunctionArgs } from 'react-router-dom';
 import { SectionAfterCautions } from '@/components/layouts/section-after-cautions';
 import { useSite } from '@/features/sites/api/get-site';
 import { useSiteRole } from '@/features/sites/utils/use-site-role';
+import { getSystemQueryOptions, useSystem } from '@/features/systems/api/get-system';
 import { RecordSystemFirstNotice } from '@/features/systems/components/record-system-first-notice';
 import { getZonesQueryOptions } from '@/features/zones/api/get-zones';
 import { InstallationSafetyCard } from '@/features/zones/components/installation-safety-card';
@@ -12,7 +13,12 @@ import { ZoneScheduleEditor } from '@/features/zones/components/zone-schedule-ed
 
 export function createLoader(queryClient: QueryClient) {
   return async ({ params }: LoaderFunctionArgs) => {
-    await queryClient.ensureQueryData(getZonesQueryOptions(params.siteId ?? ''));
+    const siteId = params.siteId ?? '';
+    // The system's resistor tolerance and cable core set every zone's expected readings.
+    await Promise.all([
+      queryClient.ensureQueryData(getZonesQueryOptions(siteId)),
+      queryClient.ensureQueryData(getSystemQueryOptions(siteId)),
+    ]);
     return null;
   };
 }
@@ -21,6 +27,11 @@ export function Component() {
   const role = useSiteRole();
   const { siteId = '' } = useParams();
   const { data: site } = useSite(siteId);
+  const { data: system } = useSystem(siteId);
+  const loopSettings = {
+    resistorTolerance: system?.resistorTolerance ?? 0.05,
+    cableCore: system?.cableCore ?? '7/0.2',
+  } as const;
 
   return (
     <>
@@ -34,10 +45,11 @@ export function Component() {
         }
         headingId="zones-heading"
         title="Zone schedule"
-        description="Every zone as fitted, in schedule order. Resistor values are in ohms; resistor code works too (2k2 for 2200). Nothing is kept until you save the schedule."
+        description="Every zone as fitted, in schedule order. Resistor values are in ohms; resistor code works too (2k2 for 2200). Expected readings allow for the system’s resistor tolerance and each zone’s cable run (set on the System tab and in each row). Nothing is kept until you save the schedule."
       >
         <ZoneScheduleEditor
           siteId={siteId}
+          loopSettings={loopSettings}
           noSystemNotice={<RecordSystemFirstNotice role={role} siteId={siteId} records="Zones" />}
         />
       </SectionAfterCautions>

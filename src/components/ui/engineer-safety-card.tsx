@@ -33,10 +33,15 @@ const points: SafetyPoint[] = [
   },
 ];
 
-export function EngineerSafetyCard() {
+/**
+ * Every caution for work on site: ladders, drilling, opening the panel, asbestos and working
+ * alone. Shared by the engineer's home and the commissioning screens.
+ */
+export function EngineerSafetyCard({ className }: { className?: string }) {
   return (
     <SafetyCard
       title="Before you climb, drill or open a panel"
+      className={className}
       points={points}
       footnote="These reminders do not replace local codes, your company's risk assessments or licensed practice. Where those say more, follow them."
     />
