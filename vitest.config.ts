@@ -45,6 +45,9 @@ export default defineConfig({
           fileParallelism: false,
           testTimeout: 60_000,
           hookTimeout: 120_000,
+          // Pages load lazily and share two cores with the stack: give a page ten seconds to
+          // reach what a test waits for before calling it wrong.
+          expect: { poll: { timeout: 10_000 } },
         },
       },
     ],
