@@ -19,6 +19,7 @@ import { createLocalDiskStorage } from '../server/files/storage';
 import { createLogger } from '../server/http/logger';
 import { createSmtpMailer } from '../server/mail/mailer';
 import { repoRoot } from '../server/paths';
+import { benchPack } from './pack';
 import { benchRecords } from './records';
 
 /**
@@ -29,6 +30,7 @@ import { benchRecords } from './records';
  *      same machine, as a ratio.
  *   3. the client's initial JavaScript, gzipped.
  *   4. the as-fitted record at one company's scale (bench/records.ts).
+ *   5. the handover pack PDF for a 40-zone site (bench/pack.ts).
  */
 const RUNS = Number(process.env.BENCH_RUNS ?? 3);
 const median = (values: number[]) => {
@@ -107,6 +109,7 @@ async function healthThroughput() {
       mailer: createSmtpMailer({ host: '127.0.0.1', port: 9, from: 'bench@example.com' }),
       storage: createLocalDiskStorage(path.join(config.dataDir, 'bench-files')),
       idpIssuer: 'http://127.0.0.1:9',
+      sealKeySecret: 'bench-only-secret-bench-only-secret-0000',
     }),
   );
   const bare = express();
@@ -150,10 +153,15 @@ async function initialJavaScriptGzipped() {
 
 const kib = (bytes: number) => `${(bytes / 1024).toFixed(1)} KiB`;
 
-// `npm run bench -- records` runs only the as-fitted record benchmark.
+// `npm run bench -- records` runs only the as-fitted record benchmark; `-- pack` only the
+// handover pack PDF.
 const only = process.argv[2];
 if (only === 'records') {
   await benchRecords();
+  process.exit(0);
+}
+if (only === 'pack') {
+  await benchPack();
   process.exit(0);
 }
 
@@ -177,6 +185,8 @@ console.log(
 );
 
 await benchRecords();
+
+await benchPack();
 
 if (existsSync(path.join(repoRoot, '.data', 'bench-client')))
   rmSync(path.join(repoRoot, '.data', 'bench-client'), { recursive: true });
