@@ -177,6 +177,7 @@ async function statementsPerRequest(
     mailer: createSmtpMailer({ host: '127.0.0.1', port: 9, from: 'bench@example.com' }),
     storage: createLocalDiskStorage(path.join(loadConfig().dataDir, 'bench-files')),
     idpIssuer: 'http://127.0.0.1:9',
+    sealKeySecret: 'bench-only-secret-bench-only-secret-0000',
   });
   const counts: Record<string, { knex: number; session: number }> = {};
   for (const url of paths) {

@@ -36,6 +36,7 @@ if (mode === 'bare') {
     mailer: createSmtpMailer({ host: '127.0.0.1', port: 9, from: 'bench@example.com' }),
     storage: createLocalDiskStorage(path.join(config.dataDir, 'bench-files')),
     idpIssuer: 'http://127.0.0.1:9',
+    sealKeySecret: 'bench-only-secret-bench-only-secret-0000',
   });
 }
 const server = createServer(app);

@@ -30,6 +30,8 @@ import { createSystemsRouter } from './systems/routes';
 import { createUserSlotsRouter } from './user-slots/routes';
 import { createZonesRouter } from './zones/routes';
 import { createOrganisationsRouter } from './organisations/routes';
+import type { PackBuildQueue } from './handover/build-queue';
+import { createHandoverRouter, createVerifyRouter } from './handover/routes';
 
 export interface AppDeps {
   db: Knex;
@@ -45,6 +47,10 @@ export interface AppDeps {
   storage: FileStorage;
   /** The identity provider's address, for links in invitation e-mails. */
   idpIssuer: string;
+  /** Encrypts the companies' seal private keys at rest. */
+  sealKeySecret: string;
+  /** Builds handover packs off the request path; without it a build runs within the request. */
+  buildQueue?: PackBuildQueue;
 }
 
 /** Builds the Wardbook API and web app. It never listens; server/index.ts does. */
@@ -68,7 +74,15 @@ export function createApp(deps: AppDeps): Express {
     app.use(express.static(deps.clientDir, { index: false }));
   }
 
+  // --- Public pack verification: no session, and nothing it does changes anything -----------------
+  app.use(createVerifyRouter(deps));
+
   // --- Sessions, the signed-in user and CSRF ---------------------------------------------------
+  // Drawn signatures are PNG images: their routes take bodies up to twice the image limit.
+  app.use(
+    ['/api/sites/:siteId/handover/signatures', '/api/my/signing-requests/:requestId/sign'],
+    express.json({ limit: '600kb' }),
+  );
   app.use(express.json({ limit: '100kb' }));
   app.use(
     sessionMiddleware({
@@ -105,6 +119,17 @@ export function createApp(deps: AppDeps): Express {
   app.use(createMyRouter(records));
   app.use(createCalculatorsRouter());
   app.use(createCommissioningRouter(records));
+  app.use(
+    createHandoverRouter({
+      db: deps.db,
+      storage: deps.storage,
+      mailer: deps.mailer,
+      logger: deps.logger,
+      publicUrl: deps.appOrigins[0]!,
+      sealKeySecret: deps.sealKeySecret,
+      buildQueue: deps.buildQueue,
+    }),
+  );
   app.use('/api', apiNotFound);
 
   // --- The single-page app answers every other GET ---------------------------------------------

@@ -10,6 +10,8 @@ import { createDb } from './db/knex';
 import { createLogger } from './http/logger';
 import { createLocalDiskStorage } from './files/storage';
 import { createSmtpMailer } from './mail/mailer';
+import { startPackBuildQueue } from './handover/build-queue';
+import { ensureSealKeys, runPackBuild } from './handover/service';
 import { OIDC_CLIENT_ID } from '../idp/clients';
 
 // The API process: configuration, dependencies, listen, and a clean stop on SIGINT/SIGTERM.
@@ -22,6 +24,22 @@ const mailer = createSmtpMailer({
   host: config.mail.smtpHost,
   port: config.mail.smtpPort,
   from: config.mail.from,
+});
+
+const handoverDeps = {
+  db,
+  storage: createLocalDiskStorage(path.join(config.dataDir, 'files')),
+  mailer,
+  logger,
+  publicUrl: config.api.publicUrl,
+  sealKeySecret: secrets.sealKeySecret,
+};
+// Each installer's sealing key is made at first start (and for a new installer, on first issue).
+await ensureSealKeys(db, secrets.sealKeySecret);
+const buildQueue = await startPackBuildQueue({
+  connection: config.postgres,
+  logger,
+  run: (buildId) => runPackBuild(handoverDeps, buildId),
 });
 
 const app = createApp({
@@ -37,8 +55,10 @@ const app = createApp({
   appOrigins: config.idp.appOrigins,
   clientDir: config.api.clientDir,
   mailer,
-  storage: createLocalDiskStorage(path.join(config.dataDir, 'files')),
+  storage: handoverDeps.storage,
   idpIssuer: config.idp.issuer,
+  sealKeySecret: secrets.sealKeySecret,
+  buildQueue,
 });
 
 const server = createServer(app);
@@ -54,6 +74,7 @@ async function shutdown(signal: string) {
   logger.info({ signal }, 'API stopping');
   server.close();
   server.closeIdleConnections();
+  await buildQueue.stop().catch(() => undefined);
   mailer.close();
   await Promise.allSettled([db.destroy(), sessionPool.end()]);
   process.exit(0);

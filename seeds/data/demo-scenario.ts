@@ -8,6 +8,8 @@ export const DEMO_PASSWORD = 'wardbook-demo-2026';
 export const DEMO_INSTALLER = {
   name: 'Fernmoor Alarm Services Ltd',
   kind: 'installer',
+  /** Pack numbers read FAS-000001-R1, FAS-000002-R1, … */
+  pack_prefix: 'FAS',
 } as const;
 
 export const DEMO_MONITORING_CENTRE = {

@@ -8,6 +8,8 @@ const secretsSchema = z.object({
   oidcClientSecret: z.string().min(32),
   idpCookieKeys: z.array(z.string().min(32)).min(1),
   idpPendingLoginKey: z.string().min(32),
+  /** Encrypts the companies' seal private keys at rest (server/handover/seal.ts). */
+  sealKeySecret: z.string().min(32),
 });
 
 export type Secrets = z.infer<typeof secretsSchema>;
@@ -19,6 +21,7 @@ export function generateSecrets(): Secrets {
     oidcClientSecret: secret(),
     idpCookieKeys: [secret()],
     idpPendingLoginKey: secret(),
+    sealKeySecret: secret(),
   };
 }
 
@@ -28,13 +31,20 @@ export function generateSecrets(): Secrets {
  */
 export function loadOrCreateSecrets(dataDir: string): Secrets {
   const file = path.join(dataDir, 'secrets.json');
+  let kept: Record<string, unknown> = {};
   if (existsSync(file)) {
-    const parsed = secretsSchema.safeParse(JSON.parse(readFileSync(file, 'utf8')));
+    kept = JSON.parse(readFileSync(file, 'utf8')) as Record<string, unknown>;
+    const parsed = secretsSchema.safeParse(kept);
     if (parsed.success) return parsed.data;
-    throw new Error(`${file} is not a valid secrets file; delete it to have new secrets made.`);
+    // A data folder from an older Wardbook lacks the newer secrets: keep what is there, add the rest.
+    const missingOnly = parsed.error.issues.every(
+      (issue) => issue.code === 'invalid_type' && !(String(issue.path[0]) in kept),
+    );
+    if (!missingOnly)
+      throw new Error(`${file} is not a valid secrets file; delete it to have new secrets made.`);
   }
   mkdirSync(dataDir, { recursive: true });
-  const secrets = generateSecrets();
+  const secrets = { ...generateSecrets(), ...kept } as Secrets;
   writeFileSync(file, JSON.stringify(secrets, null, 2), { mode: 0o600 });
   return secrets;
 }

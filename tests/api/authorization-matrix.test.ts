@@ -5,6 +5,8 @@ import { ROLES, type Role } from '../../server/users/roles';
 import { listRoutes } from '../setup/routes';
 import { createPerson } from '../setup/factories';
 import { useSiteWorld, type SiteFixture, type SiteWorld } from '../setup/site-fixtures';
+import { issuePackThroughApi, signDraftDirectly, waitForBuild } from '../setup/handover-fixtures';
+import { signaturePng } from '../setup/signature-png';
 
 /**
  * Every route of the API, every role, against a record of their own and one of someone else's.
@@ -12,8 +14,12 @@ import { useSiteWorld, type SiteFixture, type SiteWorld } from '../setup/site-fi
  */
 const { harness, db, world: currentWorld } = await useSiteWorld();
 let world: SiteWorld;
-beforeAll(() => {
+/** A real issued pack (and the build that made it) on each side. */
+const packs = {} as Record<Target, { packNumber: string; buildId: string }>;
+beforeAll(async () => {
   world = currentWorld();
+  packs.own = await issuePackThroughApi(harness, db, world.own.siteId);
+  packs.other = await issuePackThroughApi(harness, db, world.other.siteId);
 });
 
 type Target = 'own' | 'other';
@@ -115,6 +121,42 @@ const validSite = {
   requiredGrade: 2,
   environmentalClass: 2,
 };
+
+async function draftOf(target: Target) {
+  const siteId = site(target).siteId;
+  await db('handover_drafts').insert({ site_id: siteId }).onConflict('site_id').ignore();
+  return db('handover_drafts').where({ site_id: siteId }).first();
+}
+const clearCustomer = (target: Target) =>
+  db('handover_drafts')
+    .where({ site_id: site(target).siteId })
+    .update({
+      customer_signature: null,
+      customer_name: null,
+      customer_signed_via: null,
+      customer_signed_at: null,
+    });
+/** A fresh signing request to the target site's homeowner, with the customer unsigned. */
+async function openSigningRequest(target: Target) {
+  // An issue in flight ends with the draft used up: wait for it, then take the fresh draft.
+  await settleBuilds(target);
+  const draft = await draftOf(target);
+  await clearCustomer(target);
+  const homeowner = target === 'own' ? world.homeowner : world.otherHomeowner;
+  const [row] = await db('signing_requests')
+    .insert({ draft_id: draft.id, homeowner_user_id: homeowner.userId, sent_to: homeowner.email })
+    .returning<{ id: string }[]>('id');
+  return row!.id;
+}
+/** Waits for any build still running on the site, so a new issue is not refused for it. */
+async function settleBuilds(target: Target) {
+  const { agent } = await harness.signedInAs(world.engineer.userId);
+  const running = await db('pack_builds')
+    .where({ site_id: site(target).siteId })
+    .whereIn('status', ['queued', 'running'])
+    .pluck('id');
+  for (const id of running) await waitForBuild(agent, id);
+}
 
 const MATRIX: Record<string, Entry> = {
   'GET /api/health': {
@@ -527,6 +569,159 @@ const MATRIX: Record<string, Entry> = {
       },
     }),
   },
+  'GET /api/sites/:siteId/handover': {
+    allowed: STAFF,
+    scoped: true,
+    call: async (target) => ({ path: `/api/sites/${site(target).siteId}/handover` }),
+  },
+  'PUT /api/sites/:siteId/handover/variations': {
+    allowed: STAFF,
+    scoped: true,
+    call: async (target) => ({
+      path: `/api/sites/${site(target).siteId}/handover/variations`,
+      body: {
+        variations: ['The garage is left unprotected at the customer’s wish.'],
+        version: null,
+      },
+    }),
+  },
+  'GET /api/sites/:siteId/handover/preview.pdf': {
+    allowed: STAFF,
+    scoped: true,
+    call: async (target) => ({ path: `/api/sites/${site(target).siteId}/handover/preview.pdf` }),
+  },
+  'POST /api/sites/:siteId/handover/signatures/engineer': {
+    allowed: ['engineer'],
+    scoped: true,
+    call: async (target) => {
+      await db('handover_drafts')
+        .where({ site_id: site(target).siteId })
+        .update({ engineer_signature: null, engineer_name: null, engineer_signed_at: null });
+      return {
+        path: `/api/sites/${site(target).siteId}/handover/signatures/engineer`,
+        body: { image: signaturePng() },
+      };
+    },
+  },
+  'POST /api/sites/:siteId/handover/signatures/customer': {
+    allowed: ['engineer'],
+    scoped: true,
+    call: async (target) => {
+      await clearCustomer(target);
+      return {
+        path: `/api/sites/${site(target).siteId}/handover/signatures/customer`,
+        body: { name: 'Matrix Customer', image: signaturePng() },
+      };
+    },
+  },
+  'DELETE /api/sites/:siteId/handover/signatures': {
+    allowed: STAFF,
+    scoped: true,
+    call: async (target) => ({ path: `/api/sites/${site(target).siteId}/handover/signatures` }),
+  },
+  'POST /api/sites/:siteId/handover/signing-request': {
+    allowed: STAFF,
+    scoped: true,
+    call: async (target) => {
+      await clearCustomer(target);
+      return {
+        path: `/api/sites/${site(target).siteId}/handover/signing-request`,
+        body: { homeownerUserId: world.homeowner.userId },
+      };
+    },
+  },
+  'POST /api/sites/:siteId/handover/issue': {
+    allowed: ['engineer'],
+    scoped: true,
+    call: async (target) => {
+      if (target === 'own') {
+        await settleBuilds(target);
+        await signDraftDirectly(db, site(target).siteId, world.engineer.userId);
+      }
+      return { path: `/api/sites/${site(target).siteId}/handover/issue` };
+    },
+  },
+  'GET /api/handover-builds/:buildId': {
+    allowed: STAFF,
+    scoped: true,
+    call: async (target) => ({ path: `/api/handover-builds/${packs[target].buildId}` }),
+  },
+  'GET /api/packs/:packNumber/pdf': {
+    allowed: KEEPERS,
+    scoped: true,
+    call: async (target) => ({ path: `/api/packs/${packs[target].packNumber}/pdf` }),
+  },
+  'POST /api/packs/:packNumber/revoke': {
+    allowed: ['office'],
+    scoped: true,
+    call: async (target) => ({
+      path: `/api/packs/${packs[target].packNumber}/revoke`,
+      body: { reason: 'Matrix check.' },
+    }),
+  },
+  'GET /api/verify/:packNumber': {
+    allowed: 'public',
+    scoped: false,
+    call: async () => ({ path: `/api/verify/${packs.own.packNumber}` }),
+  },
+  'POST /api/verify/:packNumber/check': {
+    allowed: 'public',
+    scoped: false,
+    call: async () => ({
+      path: `/api/verify/${packs.own.packNumber}/check`,
+      body: Buffer.from('%PDF-1.3 not the pack'),
+    }),
+  },
+  'GET /api/seal-keys': {
+    allowed: 'public',
+    scoped: false,
+    call: async () => ({ path: '/api/seal-keys' }),
+  },
+  'GET /api/my/documents': {
+    allowed: ['homeowner'],
+    scoped: false,
+    call: async () => ({ path: '/api/my/documents' }),
+  },
+  'GET /api/my/signing-requests/:requestId': {
+    allowed: ['homeowner'],
+    scoped: true,
+    call: async (target) => ({
+      path: `/api/my/signing-requests/${await openSigningRequest(target)}`,
+    }),
+  },
+  'GET /api/my/signing-requests/:requestId/preview.pdf': {
+    allowed: ['homeowner'],
+    scoped: true,
+    call: async (target) => ({
+      path: `/api/my/signing-requests/${await openSigningRequest(target)}/preview.pdf`,
+    }),
+  },
+  'POST /api/my/signing-requests/:requestId/sign': {
+    allowed: ['homeowner'],
+    scoped: true,
+    call: async (target) => ({
+      path: `/api/my/signing-requests/${await openSigningRequest(target)}/sign`,
+      body: { name: 'Matrix Homeowner', image: signaturePng() },
+    }),
+  },
+  'GET /api/organisation/pack-settings': {
+    allowed: ['office'],
+    scoped: false,
+    call: async () => ({ path: '/api/organisation/pack-settings' }),
+  },
+  'PUT /api/organisation/pack-settings': {
+    allowed: ['office'],
+    scoped: false,
+    call: async () => {
+      const installer = await db('organisations').where({ id: world.installer.id }).first();
+      return { path: '/api/organisation/pack-settings', body: { prefix: installer.pack_prefix } };
+    },
+  },
+  'POST /api/organisation/seal-keys/rotate': {
+    allowed: ['office'],
+    scoped: false,
+    call: async () => ({ path: '/api/organisation/seal-keys/rotate' }),
+  },
   'GET /api/my/homes': {
     allowed: ['homeowner'],
     scoped: false,
@@ -571,7 +766,11 @@ describe('authorization matrix', () => {
   it('refuses every route to someone not signed in, except the public ones', async () => {
     for (const [route, entry] of Object.entries(MATRIX)) {
       const call = await entry.call('own', 'engineer');
-      const response = await request(harness.app)[method(route)](call.path);
+      let pending = request(harness.app)[method(route)](call.path);
+      // A public route is called as a visitor would: with its body.
+      if (entry.allowed === 'public' && call.body !== undefined)
+        pending = pending.send(call.body as object);
+      const response = await pending;
       if (entry.allowed === 'public') expect(response.status, route).toBeLessThan(400);
       // Writes without a session also lack a CSRF token; either refusal is right.
       else expect([401, 403], route).toContain(response.status);

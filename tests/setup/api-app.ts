@@ -17,6 +17,8 @@ import { createLogger } from '../../server/http/logger';
 import { createSmtpServer, Mailbox } from '../../server/fakes/smtp/mailbox';
 import { createLocalDiskStorage, type FileStorage } from '../../server/files/storage';
 import { createSmtpMailer } from '../../server/mail/mailer';
+import { startPackBuildQueue } from '../../server/handover/build-queue';
+import { runPackBuild } from '../../server/handover/service';
 import './provided';
 
 export interface ApiHarness {
@@ -48,9 +50,20 @@ export async function buildApiHarness(db: Knex): Promise<ApiHarness> {
   const storage = createLocalDiskStorage(filesDir);
   const store = createSessionStore(pool);
   const secret = randomBytes(32).toString('base64url');
+  const logger = createLogger(process.env.WARDBOOK_TEST_LOG_LEVEL ?? 'silent', 'test');
+  const sealKeySecret = randomBytes(32).toString('base64url');
+  const publicUrl = 'http://127.0.0.1:3000';
+  // Its own queue: packs built by this app are stored on this app's disk.
+  const buildQueue = await startPackBuildQueue({
+    connection: inject('database'),
+    logger,
+    queueName: `issue-pack-${randomBytes(6).toString('hex')}`,
+    run: (buildId) =>
+      runPackBuild({ db, storage, mailer, logger, publicUrl, sealKeySecret }, buildId),
+  });
   const app = createApp({
     db,
-    logger: createLogger('silent', 'test'),
+    logger,
     // Discovery is lazy; these tests never reach the identity provider.
     oidc: createOidcClient({
       issuer: 'http://127.0.0.1:9',
@@ -59,10 +72,12 @@ export async function buildApiHarness(db: Knex): Promise<ApiHarness> {
     }),
     sessionStore: store,
     sessionSecret: secret,
-    appOrigins: ['http://127.0.0.1:3000'],
+    appOrigins: [publicUrl],
     mailer,
     storage,
     idpIssuer: 'http://127.0.0.1:3001',
+    sealKeySecret,
+    buildQueue,
   });
 
   return {
@@ -95,6 +110,7 @@ export async function buildApiHarness(db: Knex): Promise<ApiHarness> {
       return { agent, csrfToken: me.body.csrfToken as string, cookie };
     },
     async close() {
+      await buildQueue.stop();
       mailer.close();
       await new Promise((resolve) => smtp.close(() => resolve(undefined)));
       await rm(filesDir, { recursive: true, force: true });

@@ -1,3 +1,4 @@
+import { randomBytes } from 'node:crypto';
 import { mkdtemp, rm } from 'node:fs/promises';
 import { createServer } from 'node:http';
 import os from 'node:os';
@@ -14,6 +15,8 @@ import { createSmtpServer, Mailbox } from '../../server/fakes/smtp/mailbox';
 import { createLocalDiskStorage } from '../../server/files/storage';
 import { createLogger } from '../../server/http/logger';
 import { createSmtpMailer } from '../../server/mail/mailer';
+import { startPackBuildQueue } from '../../server/handover/build-queue';
+import { runPackBuild } from '../../server/handover/service';
 import { createIdpApp } from '../../idp/app';
 import { OIDC_CLIENT_ID } from '../../idp/clients';
 import { generateSigningKeys } from '../../idp/keys';
@@ -79,6 +82,17 @@ export async function startStack(options: {
   idpServer.on('request', idpApp);
 
   const sessionPool = new pg.Pool({ ...options.database, max: 5 });
+  const storage = createLocalDiskStorage(filesDir);
+  const buildQueue = await startPackBuildQueue({
+    connection: options.database,
+    logger,
+    queueName: `issue-pack-${randomBytes(6).toString('hex')}`,
+    run: (buildId) =>
+      runPackBuild(
+        { db, storage, mailer, logger, publicUrl: apiUrl, sealKeySecret: secrets.sealKeySecret },
+        buildId,
+      ),
+  });
   const app = createApp({
     db,
     logger,
@@ -92,8 +106,10 @@ export async function startStack(options: {
     appOrigins: [apiUrl],
     clientDir: options.clientDir,
     mailer,
-    storage: createLocalDiskStorage(filesDir),
+    storage,
     idpIssuer: idpUrl,
+    sealKeySecret: secrets.sealKeySecret,
+    buildQueue,
   });
   apiServer.on('request', app);
   viewerServer.on('request', createMailViewer(mailbox));
@@ -108,6 +124,7 @@ export async function startStack(options: {
         server.closeAllConnections();
         await new Promise((resolve) => server.close(resolve));
       }
+      await buildQueue.stop();
       await new Promise((resolve) => smtp.close(() => resolve(undefined)));
       mailer.close();
       await Promise.all([db.destroy(), sessionPool.end()]);

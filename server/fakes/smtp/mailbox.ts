@@ -15,6 +15,9 @@ export interface CapturedMail {
 
 const KEEP = 500;
 
+/** Attachment bytes are kept beside the message so the viewer can hand them back. */
+export type CapturedAttachment = CapturedMail['attachments'][number] & { content: Buffer };
+
 /**
  * A local stand-in for an SMTP relay: accepts every message on loopback, keeps the newest in
  * memory, and lets people (the viewer) and tests read what arrived.
@@ -22,6 +25,7 @@ const KEEP = 500;
 export class Mailbox {
   private nextId = 1;
   private mails: CapturedMail[] = [];
+  private contents = new Map<number, Buffer[]>();
   private waiters = new Set<() => void>();
 
   list(): CapturedMail[] {
@@ -34,6 +38,14 @@ export class Mailbox {
 
   clear() {
     this.mails = [];
+    this.contents.clear();
+  }
+
+  attachment(id: number, index: number): CapturedAttachment | undefined {
+    const mail = this.get(id);
+    const meta = mail?.attachments[index];
+    const content = this.contents.get(id)?.[index];
+    return meta && content ? { ...meta, content } : undefined;
   }
 
   async add(stream: Readable) {
@@ -41,8 +53,13 @@ export class Mailbox {
     const to = (Array.isArray(parsed.to) ? parsed.to : parsed.to ? [parsed.to] : []).flatMap(
       (address) => address.value.map((entry) => entry.address ?? ''),
     );
+    const id = this.nextId++;
+    this.contents.set(
+      id,
+      parsed.attachments.map((attachment) => attachment.content),
+    );
     this.mails.push({
-      id: this.nextId++,
+      id,
       receivedAt: new Date().toISOString(),
       from: parsed.from?.text ?? '',
       to,
@@ -55,7 +72,10 @@ export class Mailbox {
         size: attachment.size,
       })),
     });
-    if (this.mails.length > KEEP) this.mails.splice(0, this.mails.length - KEEP);
+    if (this.mails.length > KEEP) {
+      for (const dropped of this.mails.splice(0, this.mails.length - KEEP))
+        this.contents.delete(dropped.id);
+    }
     for (const wake of this.waiters) wake();
   }
 

@@ -82,6 +82,17 @@ export function createMailViewer(mailbox: Mailbox): Express {
       ),
     );
   });
+  app.get('/messages/:id/attachments/:index', (req, res) => {
+    const attachment = mailbox.attachment(Number(req.params.id), Number(req.params.index));
+    if (!attachment) {
+      res.status(404).type('text').send('No such attachment.');
+      return;
+    }
+    res
+      .type(attachment.contentType)
+      .set('Content-Disposition', `attachment; filename="${attachment.filename.replace(/"/g, '')}"`)
+      .send(attachment.content);
+  });
   app.get('/messages/:id', (req, res) => {
     const mail = mailbox.get(Number(req.params.id));
     if (!mail) {
@@ -101,7 +112,11 @@ export function createMailViewer(mailbox: Mailbox): Express {
             mail.attachments.length
               ? html`<p>
                   Attachments:
-                  ${mail.attachments.map((a) => `${a.filename} (${a.contentType}, ${a.size} bytes)`).join('; ')}
+                  ${mail.attachments.map(
+                    (a, index) =>
+                      html`<a href="/messages/${mail.id}/attachments/${index}">${a.filename}</a>
+                        (${a.contentType}, ${a.size} bytes)`,
+                  )}
                 </p>`
               : ''
           }
