@@ -97,6 +97,10 @@ function siteRoutes(queryClient: QueryClient): RouteObject[] {
           path: 'commissioning',
           lazy: screen(queryClient, () => import('@/app/routes/app/sites/site-commissioning')),
         },
+        {
+          path: 'handover',
+          lazy: screen(queryClient, () => import('@/app/routes/app/sites/site-handover')),
+        },
       ],
     },
   ];
@@ -109,6 +113,17 @@ function staffRoutes(queryClient: QueryClient): RouteObject[] {
     {
       path: paths.calculators.path,
       lazy: screen(queryClient, () => import('@/app/routes/app/calculators')),
+    },
+  ];
+}
+
+// Office staff also keep the company's settings: pack numbering and the sealing key.
+function officeRoutes(queryClient: QueryClient): RouteObject[] {
+  return [
+    ...staffRoutes(queryClient),
+    {
+      path: paths.officeSettings.path,
+      lazy: screen(queryClient, () => import('@/app/routes/app/office-settings')),
     },
   ];
 }
@@ -149,10 +164,26 @@ function myHomeRoutes(queryClient: QueryClient): RouteObject[] {
   ];
 }
 
+// A homeowner's own sites, each phone-first with a page per section; their handover packs
+// across every home; and the page an e-mailed signing request links to.
+function homeownerRoutes(queryClient: QueryClient): RouteObject[] {
+  return [
+    ...myHomeRoutes(queryClient),
+    {
+      path: paths.documents.path,
+      lazy: screen(queryClient, () => import('@/app/routes/app/homes/my-documents')),
+    },
+    {
+      path: paths.signingRequest.path,
+      lazy: screen(queryClient, () => import('@/app/routes/app/homes/sign-request')),
+    },
+  ];
+}
+
 const roleSubRoutes: Partial<Record<Role, (queryClient: QueryClient) => RouteObject[]>> = {
   engineer: staffRoutes,
-  office: staffRoutes,
-  homeowner: myHomeRoutes,
+  office: officeRoutes,
+  homeowner: homeownerRoutes,
 };
 
 function roleRoute(queryClient: QueryClient, role: Role): RouteObject {
@@ -193,6 +224,24 @@ function createAppRouter(queryClient: QueryClient) {
           lazy: async () => ({
             Component: (await import('@/app/routes/signin-error')).SigninErrorRoute,
           }),
+        },
+        {
+          // Public: anyone holding a pack can check its status and seal without signing in.
+          path: paths.verify.lookup.path,
+          lazy: async () => ({
+            Component: (await import('@/app/routes/verify-lookup')).VerifyLookupRoute,
+          }),
+        },
+        {
+          path: paths.verify.pack.path,
+          lazy: async () => {
+            const route = await import('@/app/routes/verify-pack');
+            return {
+              Component: route.VerifyPackRoute,
+              ErrorBoundary: route.VerifyPackError,
+              loader: route.createLoader(queryClient),
+            };
+          },
         },
         {
           path: paths.app.path,

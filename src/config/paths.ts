@@ -9,6 +9,7 @@ export const SITE_SECTIONS = [
   'people',
   'files',
   'commissioning',
+  'handover',
 ] as const;
 export type SiteSection = (typeof SITE_SECTIONS)[number];
 export const MY_HOME_SECTIONS = ['zones', 'keyholders', 'user-codes', 'files', 'request'] as const;
@@ -58,6 +59,23 @@ export const paths = {
     path: 'homes/:siteId',
     getHref: (siteId: string, section?: MyHomeSection) =>
       `/homeowner/homes/${encodeURIComponent(siteId)}${section ? `/${section}` : ''}`,
+  },
+  // A homeowner's handover packs, across all their homes, and the countersigning page that the
+  // e-mailed signing request links to.
+  documents: { path: 'documents', getHref: () => '/homeowner/documents' },
+  signingRequest: {
+    path: 'sign/:requestId',
+    getHref: (requestId: string) => `/homeowner/sign/${encodeURIComponent(requestId)}`,
+  },
+  // The installer company's settings, for office staff: pack numbering and the sealing key.
+  officeSettings: { path: 'settings', getHref: () => '/office/settings' },
+  // Public, no sign-in: anyone holding a pack can check its seal and status.
+  verify: {
+    lookup: { path: '/verify', getHref: () => '/verify' },
+    pack: {
+      path: '/verify/:packNumber',
+      getHref: (packNumber: string) => `/verify/${encodeURIComponent(packNumber)}`,
+    },
   },
   // Served by the API, not the client router: always reached by a full-page navigation.
   auth: {

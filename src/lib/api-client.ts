@@ -127,17 +127,25 @@ type HttpMethod = 'GET' | 'POST' | 'PUT' | 'PATCH' | 'DELETE';
 
 type RequestOptions<Schema extends z.ZodType> = {
   method?: HttpMethod;
+  /** Sent as JSON, or as it is when a Blob (a File the person chose), typed by `contentType`. */
   body?: unknown;
+  /** For a Blob body: what it is, e.g. application/pdf. Defaults to the Blob's own type. */
+  contentType?: string;
   schema: Schema;
   signal?: AbortSignal;
 };
 
 export async function apiRequest<Schema extends z.ZodType>(
   url: string,
-  { method = 'GET', body, schema, signal }: RequestOptions<Schema>,
+  { method = 'GET', body, contentType, schema, signal }: RequestOptions<Schema>,
 ): Promise<z.output<Schema>> {
   const headers = new Headers({ Accept: 'application/json, application/problem+json' });
-  if (body !== undefined) headers.set('Content-Type', 'application/json');
+  const isRawBody = body instanceof Blob;
+  if (isRawBody) {
+    headers.set('Content-Type', contentType ?? (body.type || 'application/octet-stream'));
+  } else if (body !== undefined) {
+    headers.set('Content-Type', 'application/json');
+  }
   if (method !== 'GET' && csrfToken) headers.set('x-csrf-token', csrfToken);
 
   let response: Response;
@@ -145,7 +153,7 @@ export async function apiRequest<Schema extends z.ZodType>(
     response = await fetch(url, {
       method,
       headers,
-      body: body === undefined ? undefined : JSON.stringify(body),
+      body: body === undefined ? undefined : isRawBody ? body : JSON.stringify(body),
       credentials: 'same-origin',
       signal,
     });
@@ -185,6 +193,13 @@ export const api = {
   patch: <Schema extends z.ZodType>(url: string, body: unknown, schema: Schema) =>
     apiRequest(url, { method: 'PATCH', body, schema }),
   delete: (url: string) => apiRequest(url, { method: 'DELETE', schema: noContentSchema }),
+  /** Posts a file's bytes as the whole request body (no multipart wrapping). */
+  postFile: <Schema extends z.ZodType>(
+    url: string,
+    file: Blob,
+    contentType: string,
+    schema: Schema,
+  ) => apiRequest(url, { method: 'POST', body: file, contentType, schema }),
 };
 
 export type UploadProgress = { loadedBytes: number; totalBytes: number };

@@ -1,7 +1,7 @@
 import { CircleCheck } from 'lucide-react';
 
 import { SubmitButton } from '@/components/forms/submit-button';
-import type { ButtonVariant } from '@/components/ui/button-styles';
+import type { ButtonSize, ButtonVariant } from '@/components/ui/button-styles';
 
 type SaveRowProps = {
   saveLabel: string;
@@ -9,16 +9,17 @@ type SaveRowProps = {
   /** Said after a save went through; empty says nothing. */
   savedMessage: string;
   variant?: ButtonVariant;
+  size?: ButtonSize;
 };
 
 /**
  * The save button at the foot of a form, and beside it word that the save went through. The
  * status region is always there, so screen readers notice when the words arrive.
  */
-export function SaveRow({ saveLabel, isSaving, savedMessage, variant }: SaveRowProps) {
+export function SaveRow({ saveLabel, isSaving, savedMessage, variant, size }: SaveRowProps) {
   return (
     <div className="flex flex-wrap items-center gap-4">
-      <SubmitButton label={saveLabel} isPending={isSaving} variant={variant} />
+      <SubmitButton label={saveLabel} isPending={isSaving} variant={variant} size={size} />
       <p role="status" className="flex items-center gap-1.5 text-sm font-medium text-normal">
         {savedMessage ? (
           <>

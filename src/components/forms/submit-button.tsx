@@ -1,7 +1,7 @@
 import { Save } from 'lucide-react';
 
 import { Button } from '@/components/ui/button';
-import type { ButtonVariant } from '@/components/ui/button-styles';
+import type { ButtonSize, ButtonVariant } from '@/components/ui/button-styles';
 
 type SubmitButtonProps = {
   label: string;
@@ -9,6 +9,8 @@ type SubmitButtonProps = {
   /** What the button says while the save is on its way. */
   pendingLabel?: string;
   variant?: ButtonVariant;
+  /** lg for forms used mostly on phones. */
+  size?: ButtonSize;
 };
 
 /** A form's save button: disabled while the save is on its way, so it is not sent twice. */
@@ -17,10 +19,11 @@ export function SubmitButton({
   isPending,
   pendingLabel = 'Saving…',
   variant,
+  size,
 }: SubmitButtonProps) {
   return (
-    <Button type="submit" variant={variant} disabled={isPending}>
-      <Save aria-hidden="true" className="size-4" />
+    <Button type="submit" variant={variant} size={size} disabled={isPending}>
+      <Save aria-hidden="true" className={size === 'lg' ? 'size-5' : 'size-4'} />
       {isPending ? pendingLabel : label}
     </Button>
   );

@@ -1,7 +1,8 @@
 import { Suspense } from 'react';
-import { House } from 'lucide-react';
+import { FileText, House } from 'lucide-react';
 import { Outlet } from 'react-router-dom';
 
+import type { NavigationItem } from '@/components/layouts/navigation';
 import { PhoneLayout } from '@/components/layouts/phone-layout';
 import { PublicLayout } from '@/components/layouts/public-layout';
 import { LoadingStatus } from '@/components/ui/loading-status';
@@ -29,13 +30,18 @@ export function PersonalLayoutRoute() {
   // On a refusal page the role in view is one the person lacks: show none rather than imply it.
   const currentRole = roleInView && hasRole(me, roleInView) ? roleInView : undefined;
   const homeHref = currentRole ? roleHomeHref(currentRole) : paths.app.getHref();
+  const navigation: NavigationItem[] = [{ label: 'Home', href: homeHref, icon: House }];
+  // Homeowners keep their handover packs, from every home, in one place.
+  if (currentRole === 'homeowner') {
+    navigation.push({ label: 'Documents', href: paths.documents.getHref(), icon: FileText });
+  }
 
   return (
     <PhoneLayout
       homeHref={homeHref}
       headerAction={<SignOutButton size="lg" />}
       account={<AccountSummary currentRole={currentRole} size="lg" className="justify-between" />}
-      navigation={[{ label: 'Home', href: homeHref, icon: House }]}
+      navigation={navigation}
     >
       <Suspense fallback={<LoadingStatus label="Loading page" />}>
         <Outlet />

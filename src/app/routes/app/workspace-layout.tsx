@@ -1,5 +1,5 @@
 import { Suspense } from 'react';
-import { Building2, Calculator, House } from 'lucide-react';
+import { Building2, Calculator, House, Settings } from 'lucide-react';
 import { Outlet } from 'react-router-dom';
 
 import type { NavigationItem } from '@/components/layouts/navigation';
@@ -46,6 +46,10 @@ export function WorkspaceLayoutRoute() {
       href: paths.calculators.getHref(current.role),
       icon: Calculator,
     });
+  }
+  // The office keeps the company's own settings, such as pack numbering and the sealing key.
+  if (current?.role === 'office') {
+    navigation.push({ label: 'Settings', href: paths.officeSettings.getHref(), icon: Settings });
   }
 
   return (

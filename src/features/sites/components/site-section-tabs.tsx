@@ -36,6 +36,7 @@ export function SiteSectionTabs({ role, site }: { role: SiteRole; site: SiteDeta
       countLabel: plural(counts.files, 'file', 'files'),
     },
     { label: 'Commissioning', href: href('commissioning') },
+    { label: 'Handover', href: href('handover') },
   ];
   return <SectionTabs label="Site sections" tabs={tabs} />;
 }
