@@ -3,6 +3,7 @@ import { createHash } from 'node:crypto';
 import request from 'supertest';
 import { beforeAll, describe, expect, it } from 'vitest';
 import { createSiteRecord, useSiteWorld, type SiteWorld } from '../setup/site-fixtures';
+import { pageTexts } from '../setup/pdf-text';
 import { signaturePng } from '../setup/signature-png';
 
 const { harness, db, world: currentWorld } = await useSiteWorld();
@@ -267,6 +268,30 @@ describe('issue, download and verification', () => {
       (await db('sites').where({ id: world.own.siteId }).first()).name,
     );
     expect(row.snapshot.customer.name).toBe(world.homeowner.displayName);
+
+    // Read back with pdf.js, a reader the project did not write: the site's own values.
+    const pages = await pageTexts(pdf);
+    const text = pages.join(' ');
+    const site = await db('sites').where({ id: world.own.siteId }).first();
+    for (const page of pages) expect(page).toContain(packNumber);
+    for (const expected of [
+      site.name,
+      site.postcode,
+      'Completion certificate',
+      'As-fitted zone schedule',
+      'Power budget',
+      'Room 1',
+      'Room 2',
+      'Test Keyholder',
+      'Second Keyholder',
+      'EM/2026/0417',
+      world.homeowner.displayName,
+      world.engineer.displayName,
+      `/verify/${packNumber}`,
+    ]) {
+      expect(text, expected).toContain(expected);
+    }
+    expect(text).not.toContain('PREVIEW');
 
     const stranger = await harness.signedInAs(world.otherHomeowner.userId);
     expect((await stranger.agent.get(`/api/packs/${packNumber}/pdf`)).status).toBe(404);

@@ -23,6 +23,15 @@ describe('an engineer commissioning on a phone', () => {
     expect(engineering).not.toBeNull();
     const zones = [...engineering!.zones].sort((a, b) => a.number - b.number);
     expect(zones.length).toBeGreaterThanOrEqual(8);
+    // Start from a freshly fitted system: another browser test may have commissioned this site.
+    const system = await db('systems').where({ site_id: site.id }).first('id');
+    await db('walk_tests')
+      .whereIn(
+        'zone_id',
+        zones.map((zone) => zone.zoneId),
+      )
+      .delete();
+    await db('system_tests').where({ system_id: system.id }).delete();
 
     const context = await browser().newContext({ viewport: PHONE, hasTouch: true });
     const page = await context.newPage();

@@ -1,33 +1,13 @@
-import { getDocument } from 'pdfjs-dist/legacy/build/pdf.mjs';
 import { beforeAll, describe, expect, it } from 'vitest';
 import { renderPackPdf } from '../../server/handover/pdf/render-pack';
 import type { PackSnapshot } from '../../server/handover/snapshot';
 import { packSnapshotFixture } from '../setup/pack-snapshot-fixture';
+import { pageTexts } from '../setup/pdf-text';
 
 /**
  * The handover pack rendered for real from the invented fixture, read back with pdf.js (a PDF
  * reader the project did not write): what a homeowner or auditor would find on each page.
  */
-
-/** Each page's text, with runs of whitespace (including line breaks) as single spaces. */
-async function pageTexts(pdf: Buffer): Promise<string[]> {
-  const document = await getDocument({
-    data: new Uint8Array(pdf),
-    isEvalSupported: false,
-    useSystemFonts: false,
-    disableFontFace: true,
-  }).promise;
-  const pages: string[] = [];
-  for (let number = 1; number <= document.numPages; number++) {
-    const content = await (await document.getPage(number)).getTextContent();
-    const text = content.items
-      .map((item) => ('str' in item ? `${item.str}${item.hasEOL ? '\n' : ''}` : ''))
-      .join('');
-    pages.push(text.replace(/\s+/g, ' '));
-  }
-  await document.destroy();
-  return pages;
-}
 
 interface Rendered {
   snapshot: PackSnapshot;
