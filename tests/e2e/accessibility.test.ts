@@ -72,4 +72,16 @@ describe('WCAG 2.2 AA checks (axe-core)', () => {
     expect(await violations(page)).toEqual([]);
     await page.context().close();
   });
+
+  it('finds nothing on the public pack check, nor for an unknown pack number', async () => {
+    const page = await newPage({ width: 390, height: 844 });
+    await page.goto(`${apiUrl}/verify`);
+    await page.getByRole('heading', { level: 1, name: 'Check a handover pack' }).waitFor();
+    expect(await violations(page)).toEqual([]);
+    await page.getByRole('textbox', { name: 'Pack number' }).fill('ZZ-999999-R1');
+    await page.getByRole('button', { name: 'Check this pack' }).click();
+    await page.getByRole('heading', { level: 1, name: 'No pack with that number' }).waitFor();
+    expect(await violations(page)).toEqual([]);
+    await page.context().close();
+  });
 });
