@@ -50,6 +50,8 @@ async function coldStartSeconds(run: number): Promise<number> {
     WARDBOOK_IDP_PORT: String(base + 2),
     WARDBOOK_SMTP_PORT: String(base + 3),
     WARDBOOK_MAIL_VIEWER_PORT: String(base + 4),
+    WARDBOOK_TWILIO_PORT: String(base + 5),
+    WARDBOOK_RECEIVER_PORT: String(base + 6),
   };
   const started = performance.now();
   const child = spawn(process.execPath, ['--import', 'tsx', 'server/cli/start.ts'], {

@@ -6,8 +6,8 @@ import { startProcess, stopProcess, waitForHttp, type ManagedProcess } from './p
 
 /**
  * `npm start` and `npm run dev`: PostgreSQL, migrations and the demo seed, then the mail
- * catcher, the identity provider and the API (or Vite's dev server in front of it) as child
- * processes. Ctrl-C stops all of them, PostgreSQL included.
+ * catcher, the Twilio fake, the identity provider and the API (or Vite's dev server in front of
+ * it) as child processes. Ctrl-C stops all of them, PostgreSQL included.
  */
 const dev = process.argv.includes('--dev');
 const log = (message: string) => console.log(`[start]  ${message}`);
@@ -47,8 +47,10 @@ try {
   };
 
   launch('mail', 'server/fakes/smtp/index.ts');
+  launch('sms', 'server/fakes/twilio/index.ts');
   launch('idp', 'idp/index.ts');
   launch('api', 'server/index.ts');
+  launch('receiver', 'server/monitoring/receiver-main.ts');
   if (dev) {
     const vite = startProcess('vite', 'node_modules/vite/bin/vite.js', {});
     children.push(vite);
@@ -56,6 +58,7 @@ try {
 
   await Promise.all([
     waitForHttp(`http://127.0.0.1:${config.mail.viewerPort}/api/messages`),
+    waitForHttp(`${config.twilio.apiBaseUrl}/api/messages`),
     waitForHttp(`${config.idp.issuer}/.well-known/openid-configuration`),
     waitForHttp(`http://127.0.0.1:${config.api.port}/api/health`),
     ...(dev ? [waitForHttp(config.devServerUrl)] : []),
@@ -68,6 +71,8 @@ try {
     App                 ${appUrl}
     Sign-in service     ${config.idp.issuer}
     Local e-mail        http://127.0.0.1:${config.mail.viewerPort}
+    Local SMS           ${config.twilio.apiBaseUrl}
+    Alarm receiver      127.0.0.1:${config.monitoring.receiverPort} (SIA DC-09; npm run simulate)
     PostgreSQL          127.0.0.1:${config.postgres.port}, database "${config.postgres.database}"
 
   Demo accounts (password and one-time-code secrets): README.md, "Demo accounts".

@@ -24,6 +24,10 @@ const environmentSchema = z.object({
   WARDBOOK_IDP_PORT: port.default(3001),
   WARDBOOK_SMTP_PORT: port.default(1025),
   WARDBOOK_MAIL_VIEWER_PORT: port.default(1080),
+  /** The local Twilio fake: the Messages API, its status callbacks and a page to reply from. */
+  WARDBOOK_TWILIO_PORT: port.default(1090),
+  /** The SIA DC-09 alarm receiver (TCP). */
+  WARDBOOK_RECEIVER_PORT: port.default(7100),
   WARDBOOK_DEV_PORT: port.default(5173),
   /** Origin the browser uses for the app; the OIDC redirect comes back here. */
   WARDBOOK_PUBLIC_URL: origin.optional(),
@@ -42,10 +46,29 @@ export interface Config {
   api: { port: number; publicUrl: string; clientDir: string };
   idp: { port: number; issuer: string; appOrigins: string[] };
   mail: { smtpHost: string; smtpPort: number; viewerPort: number; from: string };
+  monitoring: { receiverPort: number };
+  twilio: {
+    port: number;
+    /** Where the SDK's requests go: the local fake's origin. */
+    apiBaseUrl: string;
+    accountSid: string;
+    /** The number keyholders see messages come from, and reply to. */
+    from: string;
+    /** The app's webhook for keyholders' replies; the fake posts them here, signed. */
+    inboundWebhookUrl: string;
+  };
   devServerUrl: string;
 }
 
 export class ConfigError extends Error {}
+
+/**
+ * The local fake's account: shaped like a Twilio Account SID ("AC" and 32 hex digits) but
+ * plainly made up, so it is never mistaken for a real account.
+ */
+export const LOCAL_TWILIO_ACCOUNT_SID = `AC${'fa4e'.repeat(8)}`;
+/** Ofcom's range for drama (07700 900000–900999): never a real subscriber. */
+export const LOCAL_TWILIO_FROM = '+447700900000';
 
 export function loadConfig(source: NodeJS.ProcessEnv = process.env): Config {
   const parsed = environmentSchema.safeParse(source);
@@ -84,6 +107,14 @@ export function loadConfig(source: NodeJS.ProcessEnv = process.env): Config {
       smtpPort: env.WARDBOOK_SMTP_PORT,
       viewerPort: env.WARDBOOK_MAIL_VIEWER_PORT,
       from: env.WARDBOOK_MAIL_FROM,
+    },
+    monitoring: { receiverPort: env.WARDBOOK_RECEIVER_PORT },
+    twilio: {
+      port: env.WARDBOOK_TWILIO_PORT,
+      apiBaseUrl: `http://127.0.0.1:${env.WARDBOOK_TWILIO_PORT}`,
+      accountSid: LOCAL_TWILIO_ACCOUNT_SID,
+      from: LOCAL_TWILIO_FROM,
+      inboundWebhookUrl: `${publicUrl}/api/webhooks/twilio/inbound`,
     },
     devServerUrl,
   };

@@ -10,6 +10,8 @@ const secretsSchema = z.object({
   idpPendingLoginKey: z.string().min(32),
   /** Encrypts the companies' seal private keys at rest (server/handover/seal.ts). */
   sealKeySecret: z.string().min(32),
+  /** Shared by the app and the local Twilio fake: Basic auth to the API, and webhook signatures. */
+  twilioAuthToken: z.string().regex(/^[0-9a-f]{32}$/),
 });
 
 export type Secrets = z.infer<typeof secretsSchema>;
@@ -22,6 +24,8 @@ export function generateSecrets(): Secrets {
     idpCookieKeys: [secret()],
     idpPendingLoginKey: secret(),
     sealKeySecret: secret(),
+    // Twilio's auth tokens are 32 hex digits; the local one has the same shape.
+    twilioAuthToken: randomBytes(16).toString('hex'),
   };
 }
 

@@ -35,6 +35,11 @@ export default async function setup(project: TestProject) {
     database: project.getProvidedContext().database,
     clientDir,
   });
-  project.provide('stack', { apiUrl: stack.apiUrl, idpUrl: stack.idpUrl, mailUrl: stack.mailUrl });
+  project.provide('stack', {
+    apiUrl: stack.apiUrl,
+    idpUrl: stack.idpUrl,
+    mailUrl: stack.mailUrl,
+    smsUrl: stack.smsUrl,
+  });
   return () => stack.stop();
 }

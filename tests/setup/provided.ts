@@ -4,6 +4,8 @@ export interface StackUrls {
   apiUrl: string;
   idpUrl: string;
   mailUrl: string;
+  /** The Twilio fake's page and API. */
+  smsUrl: string;
 }
 
 declare module 'vitest' {

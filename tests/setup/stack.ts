@@ -8,10 +8,12 @@ import pg from 'pg';
 import { createApp } from '../../server/app';
 import { createOidcClient } from '../../server/auth/oidc-client';
 import { createSessionStore } from '../../server/auth/session';
+import { LOCAL_TWILIO_ACCOUNT_SID, LOCAL_TWILIO_FROM } from '../../server/config/config';
 import { generateSecrets } from '../../server/config/secrets';
 import { createDb, type DatabaseConnection } from '../../server/db/knex';
 import { createMailViewer } from '../../server/fakes/smtp/viewer';
 import { createSmtpServer, Mailbox } from '../../server/fakes/smtp/mailbox';
+import { createTwilioFake, type TwilioFake } from '../../server/fakes/twilio/app';
 import { createLocalDiskStorage } from '../../server/files/storage';
 import { createLogger } from '../../server/http/logger';
 import { createSmtpMailer } from '../../server/mail/mailer';
@@ -26,6 +28,11 @@ export interface RunningStack {
   idpUrl: string;
   mailUrl: string;
   mailbox: Mailbox;
+  /** The Twilio fake's page and API; the SDK's `apiBaseUrl`. */
+  smsUrl: string;
+  sms: TwilioFake;
+  /** The auth token the Twilio fake checks and signs with. */
+  twilioAuthToken: string;
   stop(): Promise<void>;
 }
 
@@ -34,9 +41,9 @@ function portOf(server: { address(): string | AddressInfo | null }) {
 }
 
 /**
- * The whole of Wardbook in this process, on free loopback ports: mail catcher, identity
- * provider and API (optionally serving a built client), each built the way its own process
- * builds it. Fresh secrets and signing keys every time.
+ * The whole of Wardbook in this process, on free loopback ports: mail catcher, Twilio fake,
+ * identity provider and API (optionally serving a built client), each built the way its own
+ * process builds it. Fresh secrets and signing keys every time.
  */
 export async function startStack(options: {
   database: DatabaseConnection;
@@ -47,7 +54,9 @@ export async function startStack(options: {
   const apiServer = createServer();
   const idpServer = createServer();
   const viewerServer = createServer();
-  for (const server of [apiServer, idpServer, viewerServer]) {
+  const smsServer = createServer();
+  const servers = [apiServer, idpServer, viewerServer, smsServer];
+  for (const server of servers) {
     await new Promise<void>((resolve) => server.listen(0, '127.0.0.1', () => resolve()));
   }
   const mailbox = new Mailbox();
@@ -58,7 +67,15 @@ export async function startStack(options: {
   const apiUrl = `http://127.0.0.1:${portOf(apiServer)}`;
   const idpUrl = `http://127.0.0.1:${portOf(idpServer)}`;
   const mailUrl = `http://127.0.0.1:${portOf(viewerServer)}`;
+  const smsUrl = `http://127.0.0.1:${portOf(smsServer)}`;
   const secrets = generateSecrets();
+  const sms = createTwilioFake({
+    accountSid: LOCAL_TWILIO_ACCOUNT_SID,
+    authToken: secrets.twilioAuthToken,
+    publicUrl: smsUrl,
+    inboundWebhookUrl: `${apiUrl}/api/webhooks/twilio/inbound`,
+    phoneNumber: LOCAL_TWILIO_FROM,
+  });
   const filesDir = await mkdtemp(path.join(os.tmpdir(), 'wardbook-files-'));
   const db = createDb(options.database, 10);
   const mailer = createSmtpMailer({
@@ -113,14 +130,19 @@ export async function startStack(options: {
   });
   apiServer.on('request', app);
   viewerServer.on('request', createMailViewer(mailbox));
+  smsServer.on('request', sms.app);
 
   return {
     apiUrl,
     idpUrl,
     mailUrl,
     mailbox,
+    smsUrl,
+    sms,
+    twilioAuthToken: secrets.twilioAuthToken,
     async stop() {
-      for (const server of [apiServer, idpServer, viewerServer]) {
+      sms.close();
+      for (const server of servers) {
         server.closeAllConnections();
         await new Promise((resolve) => server.close(resolve));
       }

@@ -1,0 +1,126 @@
+import { randomBytes } from 'node:crypto';
+
+export type MessageDirection = 'outbound' | 'inbound';
+
+/** The statuses the fake moves a message through (a subset of Twilio's). */
+export type MessageStatus = 'queued' | 'sent' | 'delivered' | 'received';
+
+/** One webhook the fake posted about a message: a status callback or the inbound reply. */
+export interface WebhookAttempt {
+  url: string;
+  /** What the message's status was when this was posted. */
+  status: MessageStatus;
+  at: string;
+  /** The receiver's HTTP status, or the network error when it could not be reached. */
+  responseStatus: number | null;
+  error: string | null;
+}
+
+export interface StoredMessage {
+  sid: string;
+  accountSid: string;
+  messagingServiceSid: string | null;
+  from: string;
+  to: string;
+  body: string;
+  numSegments: number;
+  status: MessageStatus;
+  direction: MessageDirection;
+  dateCreated: string;
+  dateUpdated: string;
+  dateSent: string | null;
+  statusCallback: string | null;
+  webhooks: WebhookAttempt[];
+}
+
+const KEEP = 1000;
+
+/** Twilio's message SIDs are "SM" and 32 hex digits. */
+export function newMessageSid(): string {
+  return `SM${randomBytes(16).toString('hex')}`;
+}
+
+/**
+ * The fake's memory of every SMS it has "sent" or "received": newest 1,000 kept, read by the
+ * web page, the JSON API and tests (which can wait for a message to arrive).
+ */
+export class Inbox {
+  private messages: StoredMessage[] = [];
+  private waiters = new Set<() => void>();
+
+  /** Newest first. */
+  list(): StoredMessage[] {
+    return [...this.messages].reverse();
+  }
+
+  get(sid: string): StoredMessage | undefined {
+    return this.messages.find((message) => message.sid === sid);
+  }
+
+  clear() {
+    this.messages = [];
+  }
+
+  add(
+    message: Omit<StoredMessage, 'sid' | 'dateCreated' | 'dateUpdated' | 'dateSent' | 'webhooks'>,
+  ): StoredMessage {
+    const now = new Date().toISOString();
+    const stored: StoredMessage = {
+      ...message,
+      sid: newMessageSid(),
+      dateCreated: now,
+      dateUpdated: now,
+      dateSent: message.direction === 'inbound' ? now : null,
+      webhooks: [],
+    };
+    this.messages.push(stored);
+    if (this.messages.length > KEEP) this.messages.splice(0, this.messages.length - KEEP);
+    this.wake();
+    return stored;
+  }
+
+  setStatus(sid: string, status: MessageStatus) {
+    const message = this.get(sid);
+    if (!message) return;
+    const now = new Date().toISOString();
+    message.status = status;
+    message.dateUpdated = now;
+    if (status === 'sent') message.dateSent = now;
+    this.wake();
+  }
+
+  recordWebhook(sid: string, attempt: WebhookAttempt) {
+    this.get(sid)?.webhooks.push(attempt);
+    this.wake();
+  }
+
+  /** Resolves with the first message matching the predicate, waiting for it if needed. */
+  waitFor(
+    predicate: (message: StoredMessage) => boolean,
+    timeoutMs = 10_000,
+  ): Promise<StoredMessage> {
+    return new Promise((resolve, reject) => {
+      const check = () => {
+        const found = this.messages.find(predicate);
+        if (!found) return false;
+        cleanup();
+        resolve(found);
+        return true;
+      };
+      const timer = setTimeout(() => {
+        cleanup();
+        reject(new Error('no matching SMS arrived in time'));
+      }, timeoutMs);
+      const cleanup = () => {
+        clearTimeout(timer);
+        this.waiters.delete(wake);
+      };
+      const wake = () => void check();
+      if (!check()) this.waiters.add(wake);
+    });
+  }
+
+  private wake() {
+    for (const wake of [...this.waiters]) wake();
+  }
+}
