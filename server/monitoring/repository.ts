@@ -1,4 +1,5 @@
 import type { Knex } from 'knex';
+import { fileSignal } from './events';
 import type { Qualifier, SignalCategory } from './protocol/contact-id';
 
 export interface IncomingSignal {
@@ -50,6 +51,7 @@ export async function recordSignal(
       .pluck('id');
     // An account two centres both use cannot be placed safely: flagged like an unknown one.
     const siteId = sites.length === 1 ? (sites[0] as string) : null;
+    const eventId = await fileSignal(trx, signal, siteId);
     const [row] = await trx('signals')
       .insert({
         transport: signal.transport,
@@ -69,6 +71,7 @@ export async function recordSignal(
         qualifier: signal.qualifier,
         zone_or_user: signal.zoneOrUser,
         partition: signal.partition,
+        event_id: eventId,
       })
       .returning<{ id: string }[]>('id');
     await trx.raw('select pg_notify(?, ?)', [SIGNALS_CHANNEL, String(row!.id)]);
