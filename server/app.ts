@@ -32,6 +32,7 @@ import { createZonesRouter } from './zones/routes';
 import { createOrganisationsRouter } from './organisations/routes';
 import type { PackBuildQueue } from './handover/build-queue';
 import { createHandoverRouter, createVerifyRouter } from './handover/routes';
+import { createMonitoringRouter } from './monitoring/routes';
 
 export interface AppDeps {
   db: Knex;
@@ -130,6 +131,7 @@ export function createApp(deps: AppDeps): Express {
       buildQueue: deps.buildQueue,
     }),
   );
+  app.use(createMonitoringRouter(deps));
   app.use('/api', apiNotFound);
 
   // --- The single-page app answers every other GET ---------------------------------------------

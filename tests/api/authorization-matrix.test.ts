@@ -7,6 +7,7 @@ import { createPerson } from '../setup/factories';
 import { useSiteWorld, type SiteFixture, type SiteWorld } from '../setup/site-fixtures';
 import { issuePackThroughApi, signDraftDirectly, waitForBuild } from '../setup/handover-fixtures';
 import { signaturePng } from '../setup/signature-png';
+import { alarmFromSite } from '../setup/monitoring-fixtures';
 
 /**
  * Every route of the API, every role, against a record of their own and one of someone else's.
@@ -16,10 +17,14 @@ const { harness, db, world: currentWorld } = await useSiteWorld();
 let world: SiteWorld;
 /** A real issued pack (and the build that made it) on each side. */
 const packs = {} as Record<Target, { packNumber: string; buildId: string }>;
+/** An intruder alarm event on each side. */
+const alarmEvents = {} as Record<Target, string>;
 beforeAll(async () => {
   world = currentWorld();
   packs.own = await issuePackThroughApi(harness, db, world.own.siteId);
   packs.other = await issuePackThroughApi(harness, db, world.other.siteId);
+  alarmEvents.own = await alarmFromSite(db, world.own.siteId);
+  alarmEvents.other = await alarmFromSite(db, world.other.siteId);
 });
 
 type Target = 'own' | 'other';
@@ -721,6 +726,29 @@ const MATRIX: Record<string, Entry> = {
     allowed: ['office'],
     scoped: false,
     call: async () => ({ path: '/api/organisation/seal-keys/rotate' }),
+  },
+  'GET /api/monitoring/events': {
+    allowed: ['operator'],
+    scoped: false,
+    call: async () => ({ path: '/api/monitoring/events' }),
+  },
+  'GET /api/monitoring/events/:eventId': {
+    allowed: ['operator'],
+    scoped: true,
+    call: async (target) => ({ path: `/api/monitoring/events/${alarmEvents[target]}` }),
+  },
+  'POST /api/monitoring/events/:eventId/take': {
+    allowed: ['operator'],
+    scoped: true,
+    call: async (target) => ({ path: `/api/monitoring/events/${alarmEvents[target]}/take` }),
+  },
+  'POST /api/monitoring/events/:eventId/close': {
+    allowed: ['operator'],
+    scoped: true,
+    call: async (target) => ({
+      path: `/api/monitoring/events/${alarmEvents[target]}/close`,
+      body: { outcome: 'test_or_engineer', note: 'Matrix check.' },
+    }),
   },
   'GET /api/my/homes': {
     allowed: ['homeowner'],
