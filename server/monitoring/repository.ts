@@ -74,7 +74,10 @@ export async function recordSignal(
         event_id: eventId,
       })
       .returning<{ id: string }[]>('id');
-    await trx.raw('select pg_notify(?, ?)', [SIGNALS_CHANNEL, String(row!.id)]);
+    await trx.raw('select pg_notify(?, ?)', [
+      SIGNALS_CHANNEL,
+      JSON.stringify({ eventId, signalId: String(row!.id) }),
+    ]);
     return { id: String(row!.id), duplicate: false, siteId };
   });
 }

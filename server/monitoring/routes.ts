@@ -1,21 +1,49 @@
 import { Router, type Request } from 'express';
 import type { Knex } from 'knex';
+import type { Logger } from 'pino';
 import { actorOf } from '../audit/actor';
 import { currentUser } from '../auth/current-user';
 import { organisationIdsFor, requireRole } from '../http/guards';
 import { parseRequest } from '../http/validate';
 import { closeEventInputSchema, eventListQuerySchema } from './schema';
-import { closeEvent, eventDetail, listEvents, takeEvent } from './service';
+import { createLiveFeed } from './live';
+import { closeEvent, eventDetail, eventVisibleTo, listEvents, takeEvent } from './service';
 
 /** The monitoring centre's side: the queue of alarm events and what operators do with them. */
-export function createMonitoringRouter({ db }: { db: Knex }): Router {
+export function createMonitoringRouter({ db, logger }: { db: Knex; logger: Logger }): Router {
   const router = Router();
+  const feed = createLiveFeed(db, logger);
   const operators = requireRole('operator');
   const centresOf = (req: Request) => organisationIdsFor(currentUser(req), ['operator']);
 
   router.get('/api/monitoring/events', operators, async function queue(req, res) {
     const { status } = parseRequest(eventListQuerySchema, req.query, 'query');
     res.json({ events: await listEvents(db, centresOf(req), status) });
+  });
+
+  // Server-sent events: a line per change to the queue, so screens refetch within a second.
+  router.get('/api/monitoring/stream', operators, function stream(req, res) {
+    const centres = centresOf(req);
+    res.set({
+      'Content-Type': 'text/event-stream; charset=utf-8',
+      'Cache-Control': 'no-cache, no-transform',
+      Connection: 'keep-alive',
+      'X-Accel-Buffering': 'no',
+    });
+    res.flushHeaders();
+    res.write('retry: 2000\n\nevent: ready\ndata: {}\n\n');
+    const unsubscribe = feed.subscribe((change) => {
+      void (async () => {
+        if (change.eventId && !(await eventVisibleTo(db, centres, change.eventId))) return;
+        res.write(`event: change\ndata: ${JSON.stringify(change)}\n\n`);
+      })().catch(() => undefined);
+    });
+    // A comment now and then keeps proxies from closing a quiet stream.
+    const heartbeat = setInterval(() => res.write(': still here\n\n'), 25_000);
+    req.on('close', () => {
+      clearInterval(heartbeat);
+      unsubscribe();
+    });
   });
 
   router.get('/api/monitoring/events/:eventId', operators, async function detail(req, res) {

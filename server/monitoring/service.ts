@@ -2,6 +2,7 @@ import type { Knex } from 'knex';
 import { recordAuditEntry, type AuditEntryInput } from '../audit/repository';
 import { ConflictError, NotFoundError } from '../http/errors';
 import type { AlarmEvent, Outcome } from './schema';
+import { notifyChange } from './live';
 import { OUTCOME_LABELS } from './schema';
 
 type Actor = Pick<AuditEntryInput, 'actorUserId' | 'actorLabel' | 'ip' | 'requestId'>;
@@ -42,6 +43,11 @@ function toEvent(row: Record<string, unknown>): AlarmEvent {
     closedAt: iso(row.closed_at),
     outcome: (row.outcome as string | null) ?? null,
   };
+}
+
+/** Whether an event is one this operator's centres may see (or an unplaced one). */
+export async function eventVisibleTo(db: Knex, centreIds: string[], eventId: string) {
+  return Boolean(await eventsFor(db, centreIds).where('e.id', eventId).first('e.id'));
 }
 
 /** The live queue: highest priority first, then the oldest. */
@@ -172,6 +178,7 @@ export async function takeEvent(
       text: `Taken by ${user.displayName}.`,
       actor_user_id: user.id,
     });
+    await notifyChange(trx, { eventId });
     await recordAuditEntry(trx, {
       ...actor,
       action: 'alarm_event.taken',
@@ -205,6 +212,7 @@ export async function closeEvent(
       text: `Closed: ${OUTCOME_LABELS[input.outcome]}.${input.note ? ` ${input.note}` : ''}`,
       actor_user_id: user.id,
     });
+    await notifyChange(trx, { eventId });
     await recordAuditEntry(trx, {
       ...actor,
       action: 'alarm_event.closed',

@@ -1,3 +1,4 @@
+import type { IncomingMessage } from 'node:http';
 import type { Knex } from 'knex';
 import request from 'supertest';
 import { beforeAll, describe, expect, it } from 'vitest';
@@ -32,6 +33,8 @@ interface Call {
   path: string;
   body?: unknown;
   file?: { name: string; bytes: Buffer };
+  /** A server-sent event stream: read the status, then hang up. */
+  stream?: boolean;
 }
 interface Entry {
   /** Roles that may use the route on their own record; 'public' needs no sign-in. */
@@ -732,6 +735,11 @@ const MATRIX: Record<string, Entry> = {
     scoped: false,
     call: async () => ({ path: '/api/monitoring/events' }),
   },
+  'GET /api/monitoring/stream': {
+    allowed: ['operator'],
+    scoped: false,
+    call: async () => ({ path: '/api/monitoring/stream', stream: true }),
+  },
   'GET /api/monitoring/events/:eventId': {
     allowed: ['operator'],
     scoped: true,
@@ -779,6 +787,12 @@ async function send(agent: request.Agent, csrfToken: string, route: string, call
   let pending = agent[verb](call.path);
   if (verb !== 'get') pending = pending.set('x-csrf-token', csrfToken);
   if (call.file) return pending.attach('file', call.file.bytes, call.file.name);
+  if (call.stream)
+    return pending.buffer(false).parse((res, done) => {
+      // In Node, superagent hands the parser the IncomingMessage itself.
+      (res as unknown as IncomingMessage).destroy();
+      done(null, null);
+    });
   return call.body === undefined ? pending : pending.send(call.body as object);
 }
 

@@ -1,3 +1,5 @@
+import { get } from 'node:http';
+import type { AddressInfo } from 'node:net';
 import { beforeAll, describe, expect, it } from 'vitest';
 import { createPerson } from '../setup/factories';
 import { alarmFromSite } from '../setup/monitoring-fixtures';
@@ -109,5 +111,34 @@ describe('the operator’s queue', () => {
     expect(active.body.events.map((event: { id: string }) => event.id)).not.toContain(ownEvent);
     const done = await agent.get('/api/monitoring/events?status=closed');
     expect(done.body.events.map((event: { id: string }) => event.id)).toContain(ownEvent);
+  });
+});
+
+describe('the live stream', () => {
+  it('tells an operator of their centre’s changes within moments, and nothing of others', async () => {
+    const server = harness.app.listen(0);
+    const { port } = server.address() as AddressInfo;
+    const { cookie } = await asOperator();
+    const received: string[] = [];
+    let ready: () => void;
+    const isReady = new Promise<void>((resolve) => (ready = resolve));
+    const request = get(
+      { host: '127.0.0.1', port, path: '/api/monitoring/stream', headers: { cookie } },
+      (response) => {
+        expect(response.headers['content-type']).toContain('text/event-stream');
+        response.setEncoding('utf8');
+        response.on('data', (chunk: string) => {
+          received.push(chunk);
+          if (chunk.includes('event: ready')) ready();
+        });
+      },
+    );
+    await isReady;
+    const theirs = await alarmFromSite(db, world.other.siteId, 8);
+    const mine = await alarmFromSite(db, world.own.siteId, 9);
+    await expect.poll(() => received.join(''), { timeout: 5_000 }).toContain(mine);
+    expect(received.join('')).not.toContain(theirs);
+    request.destroy();
+    await new Promise((resolve) => server.close(resolve));
   });
 });
