@@ -1,5 +1,6 @@
 import type { Knex } from 'knex';
 import { recordAuditEntry, type AuditEntryInput } from '../audit/repository';
+import { countFalseAlarms } from '../calc/police-response';
 import { ConflictError, NotFoundError } from '../http/errors';
 import type { AlarmEvent, Outcome } from './schema';
 import { notifyChange } from './live';
@@ -71,6 +72,23 @@ async function findEvent(db: Knex, centreIds: string[], eventId: string) {
   return row as Record<string, unknown>;
 }
 
+const FALSE_OUTCOMES = ['false_alarm_user', 'false_alarm_equipment', 'false_alarm_unknown'];
+
+/** The site's false alarms in the last twelve months and what they mean for police response. */
+export async function siteFalseAlarms(db: Knex, siteId: string, now = new Date()) {
+  const times: Date[] = await db('alarm_events')
+    .where({ site_id: siteId, status: 'closed' })
+    .whereIn('outcome', FALSE_OUTCOMES)
+    .where('first_signal_at', '>', db.raw("now() - interval '13 months'"))
+    .pluck('first_signal_at');
+  const result = countFalseAlarms(times, now);
+  return {
+    count: result.count,
+    standing: result.standing,
+    oldestDropsOffAt: result.oldestDropsOffAt?.toISOString() ?? null,
+  };
+}
+
 /** One event with what the operator needs beside it: the site panel and the timeline. */
 export async function eventDetail(db: Knex, centreIds: string[], eventId: string) {
   const row = await findEvent(db, centreIds, eventId);
@@ -113,8 +131,10 @@ export async function eventDetail(db: Knex, centreIds: string[], eventId: string
           .select('id', 'category', 'first_signal_at', 'outcome')
       : [],
   ]);
+  const falseAlarms = siteId ? await siteFalseAlarms(db, siteId) : null;
   return {
     event: toEvent(row),
+    falseAlarms,
     site: site
       ? {
           name: site.name,

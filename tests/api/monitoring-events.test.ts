@@ -111,6 +111,8 @@ describe('the operator’s queue', () => {
     expect(active.body.events.map((event: { id: string }) => event.id)).not.toContain(ownEvent);
     const done = await agent.get('/api/monitoring/events?status=closed');
     expect(done.body.events.map((event: { id: string }) => event.id)).toContain(ownEvent);
+    // The false alarm now counts against the site's police response (NPCC policy).
+    expect(closed.body.falseAlarms).toMatchObject({ count: 1, standing: 'in_good_standing' });
   });
 });
 

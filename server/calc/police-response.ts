@@ -1,0 +1,46 @@
+/**
+ * False alarms against a site's police response, counted over a rolling twelve months. Under the
+ * NPCC policy on police response to security systems (../shared/checks.md), an intruder alarm
+ * gets a warning after two false calls in a rolling twelve months and loses police response after
+ * three. Pure: the caller supplies the dates of the false calls.
+ */
+export type PoliceResponseStanding = 'in_good_standing' | 'warning' | 'withdrawal_due';
+
+export const WARNING_AFTER = 2;
+export const WITHDRAWAL_AFTER = 3;
+
+export interface FalseAlarmCount {
+  count: number;
+  standing: PoliceResponseStanding;
+  /** When the oldest counted false alarm leaves the window, lowering the count. */
+  oldestDropsOffAt: Date | null;
+}
+
+/** The same day and month a year before, in UTC (29 February falls back to 28th). */
+function yearBefore(now: Date): Date {
+  const date = new Date(now);
+  date.setUTCFullYear(date.getUTCFullYear() - 1);
+  if (date.getUTCMonth() !== now.getUTCMonth()) date.setUTCDate(0);
+  return date;
+}
+
+export function countFalseAlarms(falseAlarmTimes: readonly Date[], now: Date): FalseAlarmCount {
+  const since = yearBefore(now);
+  const counted = falseAlarmTimes
+    .filter((time) => time > since && time <= now)
+    .sort((a, b) => a.getTime() - b.getTime());
+  const count = counted.length;
+  const standing: PoliceResponseStanding =
+    count >= WITHDRAWAL_AFTER
+      ? 'withdrawal_due'
+      : count >= WARNING_AFTER
+        ? 'warning'
+        : 'in_good_standing';
+  const oldest = counted[0];
+  let oldestDropsOffAt: Date | null = null;
+  if (oldest) {
+    oldestDropsOffAt = new Date(oldest);
+    oldestDropsOffAt.setUTCFullYear(oldest.getUTCFullYear() + 1);
+  }
+  return { count, standing, oldestDropsOffAt };
+}
