@@ -1,6 +1,7 @@
 import { simpleParser } from 'mailparser';
 import { SMTPServer } from 'smtp-server';
 import type { Readable } from 'node:stream';
+import { Waiters } from '../waiters';
 
 export interface CapturedMail {
   id: number;
@@ -26,7 +27,7 @@ export class Mailbox {
   private nextId = 1;
   private mails: CapturedMail[] = [];
   private contents = new Map<number, Buffer[]>();
-  private waiters = new Set<() => void>();
+  private waiters = new Waiters();
 
   list(): CapturedMail[] {
     return [...this.mails].reverse();
@@ -76,30 +77,12 @@ export class Mailbox {
       for (const dropped of this.mails.splice(0, this.mails.length - KEEP))
         this.contents.delete(dropped.id);
     }
-    for (const wake of this.waiters) wake();
+    this.waiters.wake();
   }
 
   /** Resolves with the first message to `address` matching the filter, waiting if needed. */
-  waitFor(predicate: (mail: CapturedMail) => boolean, timeoutMs = 10_000): Promise<CapturedMail> {
-    return new Promise((resolve, reject) => {
-      const check = () => {
-        const found = this.mails.find(predicate);
-        if (!found) return false;
-        cleanup();
-        resolve(found);
-        return true;
-      };
-      const timer = setTimeout(() => {
-        cleanup();
-        reject(new Error('no matching e-mail arrived in time'));
-      }, timeoutMs);
-      const cleanup = () => {
-        clearTimeout(timer);
-        this.waiters.delete(wake);
-      };
-      const wake = () => void check();
-      if (!check()) this.waiters.add(wake);
-    });
+  waitFor(predicate: (item: CapturedMail) => boolean, timeoutMs = 10_000): Promise<CapturedMail> {
+    return this.waiters.waitFor(() => this.mails.find(predicate), timeoutMs, 'e-mail');
   }
 }
 

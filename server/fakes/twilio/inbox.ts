@@ -1,4 +1,5 @@
 import { randomBytes } from 'node:crypto';
+import { Waiters } from '../waiters';
 
 export type MessageDirection = 'outbound' | 'inbound';
 
@@ -46,7 +47,7 @@ export function newMessageSid(): string {
  */
 export class Inbox {
   private messages: StoredMessage[] = [];
-  private waiters = new Set<() => void>();
+  private waiters = new Waiters();
 
   /** Newest first. */
   list(): StoredMessage[] {
@@ -75,7 +76,7 @@ export class Inbox {
     };
     this.messages.push(stored);
     if (this.messages.length > KEEP) this.messages.splice(0, this.messages.length - KEEP);
-    this.wake();
+    this.waiters.wake();
     return stored;
   }
 
@@ -86,41 +87,16 @@ export class Inbox {
     message.status = status;
     message.dateUpdated = now;
     if (status === 'sent') message.dateSent = now;
-    this.wake();
+    this.waiters.wake();
   }
 
   recordWebhook(sid: string, attempt: WebhookAttempt) {
     this.get(sid)?.webhooks.push(attempt);
-    this.wake();
+    this.waiters.wake();
   }
 
   /** Resolves with the first message matching the predicate, waiting for it if needed. */
-  waitFor(
-    predicate: (message: StoredMessage) => boolean,
-    timeoutMs = 10_000,
-  ): Promise<StoredMessage> {
-    return new Promise((resolve, reject) => {
-      const check = () => {
-        const found = this.messages.find(predicate);
-        if (!found) return false;
-        cleanup();
-        resolve(found);
-        return true;
-      };
-      const timer = setTimeout(() => {
-        cleanup();
-        reject(new Error('no matching SMS arrived in time'));
-      }, timeoutMs);
-      const cleanup = () => {
-        clearTimeout(timer);
-        this.waiters.delete(wake);
-      };
-      const wake = () => void check();
-      if (!check()) this.waiters.add(wake);
-    });
-  }
-
-  private wake() {
-    for (const wake of [...this.waiters]) wake();
+  waitFor(predicate: (item: StoredMessage) => boolean, timeoutMs = 10_000): Promise<StoredMessage> {
+    return this.waiters.waitFor(() => this.messages.find(predicate), timeoutMs, 'SMS');
   }
 }
