@@ -220,6 +220,20 @@ async function lockDraft(trx: Knex.Transaction, siteId: string): Promise<DraftRo
   return trx('handover_drafts').where({ site_id: siteId }).forUpdate().first();
 }
 
+/**
+ * Closes the draft's open signing requests: the unsigned ones when what the customer would sign
+ * has changed, or all of them when the signatures are cleared and signing starts again.
+ */
+async function withdrawRequests(trx: Knex, draftId: string, which: 'unsigned' | 'all') {
+  await trx('signing_requests')
+    .where({ draft_id: draftId })
+    .whereNull('withdrawn_at')
+    .modify((query) => {
+      if (which === 'unsigned') query.whereNull('signed_at');
+    })
+    .update({ withdrawn_at: trx.fn.now() });
+}
+
 const CLEARED_CUSTOMER = {
   customer_signature: null,
   customer_name: null,
@@ -253,11 +267,7 @@ export async function saveVariations(
         version: draft.version + 1,
         updated_at: trx.fn.now(),
       });
-    await trx('signing_requests')
-      .where({ draft_id: draft.id })
-      .whereNull('signed_at')
-      .whereNull('withdrawn_at')
-      .update({ withdrawn_at: trx.fn.now() });
+    await withdrawRequests(trx, draft.id, 'unsigned');
     await recordAuditEntry(trx, {
       ...actor,
       action: 'handover.variations_changed',
@@ -338,11 +348,7 @@ export async function signInPerson(
   await db.transaction(async (trx) => {
     const draft = await lockDraft(trx, access.id);
     await recordCustomerSignature(trx, draft, { ...input, userId: null, via: 'in_person' });
-    await trx('signing_requests')
-      .where({ draft_id: draft.id })
-      .whereNull('signed_at')
-      .whereNull('withdrawn_at')
-      .update({ withdrawn_at: trx.fn.now() });
+    await withdrawRequests(trx, draft.id, 'unsigned');
     await recordAuditEntry(trx, {
       ...actor,
       action: 'handover.customer_signed',
@@ -368,10 +374,7 @@ export async function clearSignatures(db: Knex, access: SiteAccess, actor: Actor
         version: draft.version + 1,
         updated_at: trx.fn.now(),
       });
-    await trx('signing_requests')
-      .where({ draft_id: draft.id })
-      .whereNull('withdrawn_at')
-      .update({ withdrawn_at: trx.fn.now() });
+    await withdrawRequests(trx, draft.id, 'all');
     await recordAuditEntry(trx, {
       ...actor,
       action: 'handover.signatures_cleared',
@@ -405,11 +408,7 @@ export async function sendSigningRequest(
     const draft = await lockDraft(trx, access.id);
     if (draft.customer_signed_at)
       throw new ConflictError(`${draft.customer_name ?? 'The customer'} has already signed.`);
-    await trx('signing_requests')
-      .where({ draft_id: draft.id })
-      .whereNull('withdrawn_at')
-      .whereNull('signed_at')
-      .update({ withdrawn_at: trx.fn.now() });
+    await withdrawRequests(trx, draft.id, 'unsigned');
     const [row] = await trx('signing_requests')
       .insert({
         draft_id: draft.id,
