@@ -1,7 +1,14 @@
 import { useState } from 'react';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { Cable, Cpu, Layers, Plus, Radio, Trash2, Zap } from 'lucide-react';
-import { FormProvider, useFieldArray, useForm, useFormContext, useWatch } from 'react-hook-form';
+import {
+  FormProvider,
+  useFieldArray,
+  useForm,
+  useFormContext,
+  useWatch,
+  type UseFormRegisterReturn,
+} from 'react-hook-form';
 import type { z } from 'zod';
 
 import { DEFAULT_SOUNDER_MINUTES, MAX_SOUNDER_MINUTES } from '@server/calc/power';
@@ -326,6 +333,43 @@ function Areas() {
   );
 }
 
+/** A measured quantity: a short numeric box in the reading font, with its label and hint. */
+function NumberField({
+  registration,
+  inputMode = 'decimal',
+  step = 'any',
+  min,
+  max,
+  ...field
+}: {
+  label: string;
+  hint?: string;
+  optional?: boolean;
+  error?: string;
+  registration: UseFormRegisterReturn;
+  inputMode?: 'decimal' | 'numeric';
+  step?: string;
+  min?: string | number;
+  max?: string | number;
+}) {
+  return (
+    <FormField {...field}>
+      {(control) => (
+        <input
+          {...control}
+          {...registration}
+          type="number"
+          step={step}
+          min={min}
+          max={max}
+          inputMode={inputMode}
+          className={inputClassName({ mono: true, className: 'max-w-32' })}
+        />
+      )}
+    </FormField>
+  );
+}
+
 export function SystemForm({ siteId }: { siteId: string }) {
   const system = useSystem(siteId);
   const [unplacedMessages, setUnplacedMessages] = useState<string[]>([]);
@@ -457,42 +501,26 @@ export function SystemForm({ siteId }: { siteId: string }) {
                 </select>
               )}
             </FormField>
-            <FormField
+            <NumberField
               label="Panel quiescent current (mA)"
               hint="What the panel itself draws when all is quiet, from its data sheet."
               optional
               error={errors.panelQuiescentMa?.message}
-            >
-              {(control) => (
-                <input
-                  {...control}
-                  {...register('panelQuiescentMa', { setValueAs: numberOrNull })}
-                  type="number"
-                  step="any"
-                  min="0"
-                  inputMode="decimal"
-                  className={inputClassName({ mono: true, className: 'max-w-32' })}
-                />
-              )}
-            </FormField>
-            <FormField
+              registration={register('panelQuiescentMa', { setValueAs: numberOrNull })}
+              step="any"
+              min="0"
+              inputMode="decimal"
+            />
+            <NumberField
               label="Panel current in alarm (mA)"
               hint="What the panel draws in alarm, without the sounders listed as devices."
               optional
               error={errors.panelAlarmMa?.message}
-            >
-              {(control) => (
-                <input
-                  {...control}
-                  {...register('panelAlarmMa', { setValueAs: numberOrNull })}
-                  type="number"
-                  step="any"
-                  min="0"
-                  inputMode="decimal"
-                  className={inputClassName({ mono: true, className: 'max-w-32' })}
-                />
-              )}
-            </FormField>
+              registration={register('panelAlarmMa', { setValueAs: numberOrNull })}
+              step="any"
+              min="0"
+              inputMode="decimal"
+            />
           </div>
         </Card>
 
@@ -524,7 +552,7 @@ export function SystemForm({ siteId }: { siteId: string }) {
                 </select>
               )}
             </FormField>
-            <FormField
+            <NumberField
               label="Battery capacity (Ah)"
               hint={
                 psuType === 'C'
@@ -532,59 +560,35 @@ export function SystemForm({ siteId }: { siteId: string }) {
                   : 'The standby battery’s rated capacity in ampere-hours, e.g. 7.'
               }
               error={errors.batteryAh?.message}
-            >
-              {(control) => (
-                <input
-                  {...control}
-                  {...register('batteryAh', {
-                    setValueAs: numberOrNull,
-                    disabled: psuType === 'C',
-                  })}
-                  type="number"
-                  step="0.1"
-                  min="0"
-                  inputMode="decimal"
-                  className={inputClassName({ mono: true, className: 'max-w-32' })}
-                />
-              )}
-            </FormField>
-            <FormField
+              registration={register('batteryAh', {
+                setValueAs: numberOrNull,
+                disabled: psuType === 'C',
+              })}
+              step="0.1"
+              min="0"
+              inputMode="decimal"
+            />
+            <NumberField
               label="Supply voltage (V)"
               hint="The charging voltage at the panel's detector supply terminals, usually 13.7 V."
               error={errors.supplyVolts?.message}
-            >
-              {(control) => (
-                <input
-                  {...control}
-                  {...register('supplyVolts', { setValueAs: numberOrUndefined })}
-                  type="number"
-                  step="0.1"
-                  min="9"
-                  max="30"
-                  inputMode="decimal"
-                  className={inputClassName({ mono: true, className: 'max-w-32' })}
-                />
-              )}
-            </FormField>
-            <FormField
+              registration={register('supplyVolts', { setValueAs: numberOrUndefined })}
+              step="0.1"
+              min="9"
+              max="30"
+              inputMode="decimal"
+            />
+            <NumberField
               label="Sounder cut-off (minutes)"
               hint={`How long the sounders ring in alarm: 1 to ${MAX_SOUNDER_MINUTES} minutes, as external sounders must stop within ${MAX_SOUNDER_MINUTES}. ${DEFAULT_SOUNDER_MINUTES} is usual. The power budget counts this time in alarm.`}
               error={errors.sounderMinutes?.message}
-            >
-              {(control) => (
-                <input
-                  {...control}
-                  {...register('sounderMinutes', { setValueAs: numberOrUndefined })}
-                  type="number"
-                  step="1"
-                  min="1"
-                  max={MAX_SOUNDER_MINUTES}
-                  inputMode="numeric"
-                  className={inputClassName({ mono: true, className: 'max-w-32' })}
-                />
-              )}
-            </FormField>
-            <FormField
+              registration={register('sounderMinutes', { setValueAs: numberOrUndefined })}
+              step="1"
+              min="1"
+              max={MAX_SOUNDER_MINUTES}
+              inputMode="numeric"
+            />
+            <NumberField
               label="Standby time override (hours)"
               optional
               hint={
@@ -593,19 +597,11 @@ export function SystemForm({ siteId }: { siteId: string }) {
                   : "Needed for type B and C supplies, whose standby time is not in Wardbook's table. Leave empty for type A: the EN 50131-6 period for the site's grade is used."
               }
               error={errors.standbyHoursOverride?.message}
-            >
-              {(control) => (
-                <input
-                  {...control}
-                  {...register('standbyHoursOverride', { setValueAs: numberOrNull })}
-                  type="number"
-                  step="any"
-                  min="0"
-                  inputMode="decimal"
-                  className={inputClassName({ mono: true, className: 'max-w-32' })}
-                />
-              )}
-            </FormField>
+              registration={register('standbyHoursOverride', { setValueAs: numberOrNull })}
+              step="any"
+              min="0"
+              inputMode="decimal"
+            />
             <div className="md:col-span-2">
               <label className="flex min-h-10 items-start gap-3">
                 <input
