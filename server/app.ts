@@ -33,6 +33,9 @@ import { createOrganisationsRouter } from './organisations/routes';
 import type { PackBuildQueue } from './handover/build-queue';
 import { createHandoverRouter, createVerifyRouter } from './handover/routes';
 import { createMonitoringRouter } from './monitoring/routes';
+import { createTwilioWebhookRouter } from './monitoring/callout/webhooks';
+import { createKeyholderAlertsRouter } from './keyholder-alerts/routes';
+import { createSignalHistoryRouter } from './signal-history/routes';
 
 export interface AppDeps {
   db: Knex;
@@ -52,6 +55,10 @@ export interface AppDeps {
   sealKeySecret: string;
   /** Builds handover packs off the request path; without it a build runs within the request. */
   buildQueue?: PackBuildQueue;
+  /** Checks the signatures on Twilio's webhooks; without it every webhook is refused. */
+  twilioAuthToken?: string;
+  /** Sends queued keyholder texts now (server/monitoring/callout/engine.ts). */
+  callOut?: { kick(): void };
 }
 
 /** Builds the Wardbook API and web app. It never listens; server/index.ts does. */
@@ -77,6 +84,9 @@ export function createApp(deps: AppDeps): Express {
 
   // --- Public pack verification: no session, and nothing it does changes anything -----------------
   app.use(createVerifyRouter(deps));
+
+  // --- Twilio's webhooks: no session; each request must carry Twilio's signature ---------------
+  app.use(createTwilioWebhookRouter({ ...deps, publicUrl: deps.appOrigins[0]! }));
 
   // --- Sessions, the signed-in user and CSRF ---------------------------------------------------
   // Drawn signatures are PNG images: their routes take bodies up to twice the image limit.
@@ -132,6 +142,8 @@ export function createApp(deps: AppDeps): Express {
     }),
   );
   app.use(createMonitoringRouter(deps));
+  app.use(createKeyholderAlertsRouter(deps));
+  app.use(createSignalHistoryRouter(deps));
   app.use('/api', apiNotFound);
 
   // --- The single-page app answers every other GET ---------------------------------------------

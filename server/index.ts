@@ -12,6 +12,8 @@ import { createLocalDiskStorage } from './files/storage';
 import { createSmtpMailer } from './mail/mailer';
 import { startPackBuildQueue } from './handover/build-queue';
 import { ensureSealKeys, runPackBuild } from './handover/service';
+import { startCallOutEngine } from './monitoring/callout/engine';
+import { createSmsSender } from './sms/sender';
 import { OIDC_CLIENT_ID } from '../idp/clients';
 
 // The API process: configuration, dependencies, listen, and a clean stop on SIGINT/SIGTERM.
@@ -42,6 +44,20 @@ const buildQueue = await startPackBuildQueue({
   run: (buildId) => runPackBuild(handoverDeps, buildId),
 });
 
+// Keyholder texts go out through the twilio SDK (to the local fake unless configured otherwise).
+const callOut = await startCallOutEngine({
+  db,
+  logger,
+  sms: createSmsSender({
+    accountSid: config.twilio.accountSid,
+    authToken: secrets.twilioAuthToken,
+    from: config.twilio.from,
+    apiBaseUrl: config.twilio.apiBaseUrl,
+  }),
+  statusCallbackUrl: `${config.api.publicUrl}/api/webhooks/twilio/status`,
+  connection: config.postgres,
+});
+
 const app = createApp({
   db,
   logger,
@@ -59,6 +75,8 @@ const app = createApp({
   idpIssuer: config.idp.issuer,
   sealKeySecret: secrets.sealKeySecret,
   buildQueue,
+  twilioAuthToken: secrets.twilioAuthToken,
+  callOut,
 });
 
 const server = createServer(app);
@@ -75,6 +93,7 @@ async function shutdown(signal: string) {
   server.close();
   server.closeIdleConnections();
   await buildQueue.stop().catch(() => undefined);
+  await callOut.stop().catch(() => undefined);
   mailer.close();
   await Promise.allSettled([db.destroy(), sessionPool.end()]);
   process.exit(0);

@@ -44,3 +44,33 @@ export function countFalseAlarms(falseAlarmTimes: readonly Date[], now: Date): F
   }
   return { count, standing, oldestDropsOffAt };
 }
+
+/**
+ * Whether the police may be asked to attend (NPCC policy): only for a site with a URN whose
+ * response has not been withdrawn, and for intruder alarms only once confirmed (BS 8243).
+ */
+export function policeEligibility(
+  event: { category: string; confirmed: boolean; status: string },
+  site: { police_urn: string | null; urn_status: string } | null,
+): { eligible: boolean; reason: string } {
+  if (!site) return { eligible: false, reason: 'No site has this account.' };
+  if (!site.police_urn || !['active', 'warning'].includes(site.urn_status))
+    return {
+      eligible: false,
+      reason:
+        site.urn_status === 'withdrawn'
+          ? 'Police response to this site is withdrawn (NPCC policy): call keyholders.'
+          : 'This site has no active police URN: call keyholders.',
+    };
+  if (event.category === 'hold_up')
+    return { eligible: true, reason: 'Hold-up alarm at a site with a police URN.' };
+  if (event.category === 'burglary' && event.confirmed)
+    return { eligible: true, reason: 'Confirmed intruder alarm at a site with a police URN.' };
+  if (event.category === 'burglary')
+    return {
+      eligible: false,
+      reason:
+        'Unconfirmed intruder alarm: police attend confirmed alarms only (sequential confirmation, BS 8243).',
+    };
+  return { eligible: false, reason: 'Police are requested for intruder and hold-up alarms only.' };
+}

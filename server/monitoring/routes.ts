@@ -7,10 +7,33 @@ import { organisationIdsFor, requireRole } from '../http/guards';
 import { parseRequest } from '../http/validate';
 import { closeEventInputSchema, eventListQuerySchema } from './schema';
 import { createLiveFeed } from './live';
-import { closeEvent, eventDetail, eventVisibleTo, listEvents, takeEvent } from './service';
+import {
+  closeEvent,
+  eventDetail,
+  eventVisibleTo,
+  findEvent,
+  handlingFigures,
+  listEvents,
+  takeEvent,
+} from './service';
+import {
+  recordCallInputSchema,
+  requestPoliceInputSchema,
+  startCallOutInputSchema,
+} from './callout/schema';
+import { recordCall, requestPolice, startCallOut } from './callout/service';
 
 /** The monitoring centre's side: the queue of alarm events and what operators do with them. */
-export function createMonitoringRouter({ db, logger }: { db: Knex; logger: Logger }): Router {
+export function createMonitoringRouter({
+  db,
+  logger,
+  callOut,
+}: {
+  db: Knex;
+  logger: Logger;
+  /** Sends queued keyholder texts; without it they wait for the next process that has one. */
+  callOut?: { kick(): void };
+}): Router {
   const router = Router();
   const feed = createLiveFeed(db, logger);
   const operators = requireRole('operator');
@@ -61,6 +84,39 @@ export function createMonitoringRouter({ db, logger }: { db: Knex; logger: Logge
     const input = parseRequest(closeEventInputSchema, req.body, 'body');
     await closeEvent(db, centresOf(req), eventId, input, currentUser(req), actorOf(req));
     res.json(await eventDetail(db, centresOf(req), eventId));
+  });
+
+  router.post(
+    '/api/monitoring/events/:eventId/call-out',
+    operators,
+    async function messageKeyholders(req, res) {
+      const eventId = String(req.params.eventId);
+      parseRequest(startCallOutInputSchema, req.body ?? {}, 'body');
+      await findEvent(db, centresOf(req), eventId);
+      await startCallOut(db, eventId, currentUser(req), actorOf(req));
+      callOut?.kick();
+      res.json(await eventDetail(db, centresOf(req), eventId));
+    },
+  );
+
+  router.post('/api/monitoring/events/:eventId/calls', operators, async function call(req, res) {
+    const eventId = String(req.params.eventId);
+    const input = parseRequest(recordCallInputSchema, req.body, 'body');
+    await findEvent(db, centresOf(req), eventId);
+    await recordCall(db, eventId, input, currentUser(req), actorOf(req));
+    res.json(await eventDetail(db, centresOf(req), eventId));
+  });
+
+  router.post('/api/monitoring/events/:eventId/police', operators, async function police(req, res) {
+    const eventId = String(req.params.eventId);
+    const input = parseRequest(requestPoliceInputSchema, req.body, 'body');
+    await findEvent(db, centresOf(req), eventId);
+    await requestPolice(db, eventId, input, currentUser(req), actorOf(req));
+    res.json(await eventDetail(db, centresOf(req), eventId));
+  });
+
+  router.get('/api/monitoring/figures', operators, async function figures(req, res) {
+    res.json(await handlingFigures(db, centresOf(req)));
   });
 
   return router;

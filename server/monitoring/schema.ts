@@ -6,6 +6,7 @@ export const OUTCOMES = [
   'genuine',
   'false_alarm_user',
   'false_alarm_equipment',
+  'false_alarm_environment',
   'false_alarm_unknown',
   'test_or_engineer',
   'no_action_needed',
@@ -15,7 +16,8 @@ export type Outcome = (typeof OUTCOMES)[number];
 export const OUTCOME_LABELS: Record<Outcome, string> = {
   genuine: 'Genuine: intruder, hold-up or fire',
   false_alarm_user: 'False alarm: user error',
-  false_alarm_equipment: 'False alarm: equipment or environment',
+  false_alarm_equipment: 'False alarm: equipment fault',
+  false_alarm_environment: 'False alarm: environment (draughts, pests, heat)',
   false_alarm_unknown: 'False alarm: cause not found',
   test_or_engineer: 'Test or engineer on site',
   no_action_needed: 'No action needed (fault or tamper logged)',

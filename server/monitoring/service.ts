@@ -1,6 +1,6 @@
 import type { Knex } from 'knex';
 import { recordAuditEntry, type AuditEntryInput } from '../audit/repository';
-import { countFalseAlarms } from '../calc/police-response';
+import { countFalseAlarms, policeEligibility } from '../calc/police-response';
 import { ConflictError, NotFoundError } from '../http/errors';
 import type { AlarmEvent, Outcome } from './schema';
 import { notifyChange } from './live';
@@ -65,14 +65,19 @@ export async function listEvents(db: Knex, centreIds: string[], status: 'active'
   return rows.map(toEvent);
 }
 
-async function findEvent(db: Knex, centreIds: string[], eventId: string) {
+export async function findEvent(db: Knex, centreIds: string[], eventId: string) {
   if (!UUID.test(eventId)) throw new NotFoundError();
   const row = await eventsFor(db, centreIds).where('e.id', eventId).first();
   if (!row) throw new NotFoundError();
   return row as Record<string, unknown>;
 }
 
-const FALSE_OUTCOMES = ['false_alarm_user', 'false_alarm_equipment', 'false_alarm_unknown'];
+export const FALSE_OUTCOMES = [
+  'false_alarm_user',
+  'false_alarm_equipment',
+  'false_alarm_environment',
+  'false_alarm_unknown',
+];
 
 /** The site's false alarms in the last twelve months and what they mean for police response. */
 export async function siteFalseAlarms(db: Knex, siteId: string, now = new Date()) {
@@ -114,6 +119,7 @@ export async function eventDetail(db: Knex, centreIds: string[], eventId: string
             'police_urn',
             'urn_status',
             'confirmation_window_minutes',
+            'monitoring_centre_id',
           )
       : undefined,
     siteId
@@ -131,9 +137,55 @@ export async function eventDetail(db: Knex, centreIds: string[], eventId: string
           .select('id', 'category', 'first_signal_at', 'outcome')
       : [],
   ]);
-  const falseAlarms = siteId ? await siteFalseAlarms(db, siteId) : null;
+  const [falseAlarms, messages, centre] = await Promise.all([
+    siteId ? siteFalseAlarms(db, siteId) : null,
+    db('keyholder_messages').where({ event_id: eventId }).orderBy('queued_at'),
+    site?.monitoring_centre_id
+      ? db('organisations').where({ id: site.monitoring_centre_id }).first('callout_wait_minutes')
+      : undefined,
+  ]);
+  const iso = (value: unknown) => (value instanceof Date ? value.toISOString() : null);
+  const seconds = (from: unknown, to: unknown) =>
+    from instanceof Date && to instanceof Date
+      ? Math.round((to.getTime() - from.getTime()) / 1000)
+      : null;
+  const police = policeEligibility(
+    {
+      category: row.category as string,
+      confirmed: row.confirmed as boolean,
+      status: row.status as string,
+    },
+    site ? { police_urn: site.police_urn, urn_status: site.urn_status } : null,
+  );
   return {
     event: toEvent(row),
+    callOut: {
+      status: row.callout_status as string,
+      waitMinutes: Number(centre?.callout_wait_minutes ?? 5),
+      attending: (row.attending_keyholder as string | null) ?? null,
+      messages: messages.map((message: Record<string, unknown>) => ({
+        id: message.id as string,
+        position: message.call_order as number,
+        name: message.keyholder_name as string,
+        phone: message.phone as string,
+        status: message.status as string,
+        reply: (message.reply as string | null) ?? null,
+        queuedAt: iso(message.queued_at)!,
+        sentAt: iso(message.sent_at),
+        deliveredAt: iso(message.delivered_at),
+        repliedAt: iso(message.replied_at),
+      })),
+    },
+    police: {
+      ...police,
+      urn: site?.police_urn ?? null,
+      requestedAt: iso(row.police_requested_at),
+      incidentReference: (row.police_incident_reference as string | null) ?? null,
+    },
+    handling: {
+      secondsToTake: seconds(row.first_signal_at, row.taken_at),
+      secondsToClose: seconds(row.first_signal_at, row.closed_at),
+    },
     falseAlarms,
     site: site
       ? {
@@ -241,4 +293,37 @@ export async function closeEvent(
       summary: `Alarm event closed: ${OUTCOME_LABELS[input.outcome]}`,
     });
   });
+}
+
+/** How quickly events are taken and closed: medians and the 90th centile, in seconds. */
+export async function handlingFigures(db: Knex, centreIds: string[]) {
+  const period = async (hours: number) => {
+    const row = await db('alarm_events as e')
+      .join('sites as s', 's.id', 'e.site_id')
+      .whereIn('s.monitoring_centre_id', centreIds)
+      .where('e.first_signal_at', '>', db.raw('now() - make_interval(hours => ?)', [hours]))
+      .first(
+        db.raw('count(*)::int as events'),
+        db.raw("count(*) filter (where e.status = 'closed')::int as closed"),
+        db.raw(
+          'percentile_cont(0.5) within group (order by extract(epoch from e.taken_at - e.first_signal_at)) as median_take',
+        ),
+        db.raw(
+          'percentile_cont(0.9) within group (order by extract(epoch from e.taken_at - e.first_signal_at)) as p90_take',
+        ),
+        db.raw(
+          'percentile_cont(0.5) within group (order by extract(epoch from e.closed_at - e.first_signal_at)) as median_close',
+        ),
+      );
+    const rounded = (value: unknown) => (value === null ? null : Math.round(Number(value)));
+    return {
+      events: Number(row.events),
+      closed: Number(row.closed),
+      medianSecondsToTake: rounded(row.median_take),
+      p90SecondsToTake: rounded(row.p90_take),
+      medianSecondsToClose: rounded(row.median_close),
+    };
+  };
+  const [last24Hours, last7Days] = await Promise.all([period(24), period(24 * 7)]);
+  return { last24Hours, last7Days };
 }

@@ -25,6 +25,12 @@ export interface OutgoingSms {
 export interface SmsSender {
   /** Hands the message to Twilio and resolves with its SID ("SM…"); rejects with the SDK's RestException. */
   send(sms: OutgoingSms): Promise<string>;
+  /**
+   * The SID of a message already sent to `to` whose text contains `marker`, if any. Twilio has
+   * no idempotency key for messages, so after a crash mid-send this is how a sender learns
+   * whether the provider took the message before sending it again.
+   */
+  findSent(to: string, marker: string): Promise<string | null>;
 }
 
 const TWILIO_HOST = /(^|\.)twilio\.com$/i;
@@ -73,6 +79,10 @@ export function createSmsSender(options: SmsSenderOptions): SmsSender {
     async send({ to, body, statusCallback }) {
       const message = await client.messages.create({ ...sender, to, body, statusCallback });
       return message.sid;
+    },
+    async findSent(to, marker) {
+      const recent = await client.messages.list({ to, limit: 100 });
+      return recent.find((message) => message.body.includes(marker))?.sid ?? null;
     },
   };
 }

@@ -37,8 +37,11 @@ interface Call {
   stream?: boolean;
 }
 interface Entry {
-  /** Roles that may use the route on their own record; 'public' needs no sign-in. */
-  allowed: readonly Role[] | 'public' | 'anyone-signed-in';
+  /**
+   * Roles that may use the route on their own record; 'public' needs no sign-in; 'webhook'
+   * needs no sign-in but a provider's signature (tests/api/keyholder-callout.test.ts).
+   */
+  allowed: readonly Role[] | 'public' | 'anyone-signed-in' | 'webhook';
   /** Whether the route addresses a record (site, organisation, home): someone else's is a 404. */
   scoped: boolean;
   call(target: Target, role: Role): Promise<Call>;
@@ -72,6 +75,43 @@ async function freshKeyholder(dbHandle: Knex, siteId: string, email: string | nu
     })
     .returning<{ id: string }[]>('id');
   return row!.id;
+}
+
+/** A burglary event on the target's site, already taken by the (own) operator. */
+async function takenEvent(target: Target, category = 'burglary') {
+  const [row] = await db('alarm_events')
+    .insert({
+      site_id: site(target).siteId,
+      account: `M${Date.now()}`,
+      category,
+      priority: category === 'hold_up' ? 1 : 3,
+      status: 'taken',
+      taken_by: world.operator.userId,
+      taken_at: db.fn.now(),
+      first_signal_at: db.fn.now(),
+      last_signal_at: db.fn.now(),
+    })
+    .returning<{ id: string }[]>('id');
+  return row!.id;
+}
+
+/** An open alarm the target's keyholder has been texted about. */
+async function alertFor(target: Target) {
+  const eventId = await takenEvent(target);
+  const keyholder = await db('keyholders')
+    .where({ id: site(target).keyholderId })
+    .first('id', 'name', 'phone');
+  await db('keyholder_messages').insert({
+    event_id: eventId,
+    keyholder_id: keyholder.id,
+    call_order: 1,
+    keyholder_name: keyholder.name,
+    phone: keyholder.phone,
+    body: 'Matrix alert.',
+    reference: `MX${Math.random().toString(36).slice(2, 8).toUpperCase()}`,
+    status: 'delivered',
+  });
+  return eventId;
 }
 
 async function freshSlot(siteId: string) {
@@ -758,6 +798,79 @@ const MATRIX: Record<string, Entry> = {
       body: { outcome: 'test_or_engineer', note: 'Matrix check.' },
     }),
   },
+  'POST /api/monitoring/events/:eventId/call-out': {
+    allowed: ['operator'],
+    scoped: true,
+    call: async (target) => ({
+      path: `/api/monitoring/events/${await takenEvent(target)}/call-out`,
+      body: {},
+    }),
+  },
+  'POST /api/monitoring/events/:eventId/calls': {
+    allowed: ['operator'],
+    scoped: true,
+    call: async (target) => ({
+      path: `/api/monitoring/events/${await takenEvent(target)}/calls`,
+      body: { position: 1, result: 'no_answer', note: 'Matrix call.' },
+    }),
+  },
+  'POST /api/monitoring/events/:eventId/police': {
+    allowed: ['operator'],
+    scoped: true,
+    call: async (target) => {
+      await db('sites')
+        .where({ id: site(target).siteId })
+        .update({ police_urn: 'MX/0001/26', urn_status: 'active' });
+      return {
+        path: `/api/monitoring/events/${await takenEvent(target, 'hold_up')}/police`,
+        body: { incidentReference: 'MATRIX 1' },
+      };
+    },
+  },
+  'GET /api/monitoring/figures': {
+    allowed: ['operator'],
+    scoped: false,
+    call: async () => ({ path: '/api/monitoring/figures' }),
+  },
+  'POST /api/webhooks/twilio/status': {
+    allowed: 'webhook',
+    scoped: false,
+    call: async () => ({
+      path: `/api/webhooks/twilio/status?message=${crypto.randomUUID()}`,
+      body: { MessageSid: `SM${'0'.repeat(32)}`, MessageStatus: 'delivered' },
+    }),
+  },
+  'POST /api/webhooks/twilio/inbound': {
+    allowed: 'webhook',
+    scoped: false,
+    call: async () => ({
+      path: '/api/webhooks/twilio/inbound',
+      body: { From: '+447700900555', Body: '1' },
+    }),
+  },
+  'GET /api/my/alerts': {
+    allowed: ['keyholder'],
+    scoped: false,
+    call: async () => ({ path: '/api/my/alerts' }),
+  },
+  'POST /api/my/alerts/:eventId/response': {
+    allowed: ['keyholder'],
+    scoped: true,
+    call: async (target) => ({
+      path: `/api/my/alerts/${await alertFor(target)}/response`,
+      body: { response: 'attending' },
+    }),
+  },
+  'GET /api/my/homes/:siteId/signals': {
+    allowed: ['homeowner'],
+    scoped: true,
+    call: async (target) => ({ path: `/api/my/homes/${site(target).siteId}/signals` }),
+  },
+  'GET /api/sites/:siteId/false-alarms': {
+    allowed: ['engineer', 'office', 'operator'],
+    scoped: true,
+    call: async (target) => ({ path: `/api/sites/${site(target).siteId}/false-alarms` }),
+  },
   'GET /api/my/homes': {
     allowed: ['homeowner'],
     scoped: false,
@@ -814,6 +927,7 @@ describe('authorization matrix', () => {
         pending = pending.send(call.body as object);
       const response = await pending;
       if (entry.allowed === 'public') expect(response.status, route).toBeLessThan(400);
+      else if (entry.allowed === 'webhook') expect(response.status, route).toBe(403);
       // Writes without a session also lack a CSRF token; either refusal is right.
       else expect([401, 403], route).toContain(response.status);
     }
@@ -824,7 +938,7 @@ describe('authorization matrix', () => {
       const { agent, csrfToken } = await harness.signedInAs(personOf(role).userId);
       const outcomes: string[] = [];
       for (const [route, entry] of Object.entries(MATRIX)) {
-        if (entry.allowed === 'public') continue;
+        if (entry.allowed === 'public' || entry.allowed === 'webhook') continue;
         const allowed = entry.allowed === 'anyone-signed-in' || entry.allowed.includes(role);
         const own = await send(agent, csrfToken, route, await entry.call('own', role));
         const ownOk = allowed ? own.status >= 200 && own.status < 300 : own.status === 403;

@@ -11,7 +11,11 @@ let stack: RunningStack;
 let installerId: string;
 
 beforeAll(async () => {
-  stack = await startStack({ database: inject('database'), attemptsPerWindow: 1000 });
+  stack = await startStack({
+    database: inject('database'),
+    attemptsPerWindow: 1000,
+    sendTexts: false,
+  });
   installerId = (await createOrganisation(db, 'installer')).id;
 });
 

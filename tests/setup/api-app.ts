@@ -36,7 +36,15 @@ export interface ApiHarness {
  * The real app, in-process, for API tests that are not about the sign-in flow itself.
  * Sessions are written into the real session store, exactly as the callback writes them.
  */
-export async function buildApiHarness(db: Knex): Promise<ApiHarness> {
+export async function buildApiHarness(
+  db: Knex,
+  options: {
+    /** The origin the app believes it is served at (webhook signatures cover it). */
+    publicUrl?: string;
+    twilioAuthToken?: string;
+    callOut?: { kick(): void };
+  } = {},
+): Promise<ApiHarness> {
   const pool = new pg.Pool({ ...inject('database'), max: 3 });
   const mailbox = new Mailbox();
   const smtp = createSmtpServer(mailbox);
@@ -52,7 +60,7 @@ export async function buildApiHarness(db: Knex): Promise<ApiHarness> {
   const secret = randomBytes(32).toString('base64url');
   const logger = createLogger(process.env.WARDBOOK_TEST_LOG_LEVEL ?? 'silent', 'test');
   const sealKeySecret = randomBytes(32).toString('base64url');
-  const publicUrl = 'http://127.0.0.1:3000';
+  const publicUrl = options.publicUrl ?? 'http://127.0.0.1:3000';
   // Its own queue: packs built by this app are stored on this app's disk.
   const buildQueue = await startPackBuildQueue({
     connection: inject('database'),
@@ -78,6 +86,8 @@ export async function buildApiHarness(db: Knex): Promise<ApiHarness> {
     idpIssuer: 'http://127.0.0.1:3001',
     sealKeySecret,
     buildQueue,
+    twilioAuthToken: options.twilioAuthToken,
+    callOut: options.callOut,
   });
 
   return {

@@ -19,6 +19,8 @@ import { createLogger } from '../../server/http/logger';
 import { createSmtpMailer } from '../../server/mail/mailer';
 import { startPackBuildQueue } from '../../server/handover/build-queue';
 import { runPackBuild } from '../../server/handover/service';
+import { startCallOutEngine, type CallOutEngine } from '../../server/monitoring/callout/engine';
+import { createSmsSender } from '../../server/sms/sender';
 import { createIdpApp } from '../../idp/app';
 import { OIDC_CLIENT_ID } from '../../idp/clients';
 import { generateSigningKeys } from '../../idp/keys';
@@ -33,6 +35,8 @@ export interface RunningStack {
   sms: TwilioFake;
   /** The auth token the Twilio fake checks and signs with. */
   twilioAuthToken: string;
+  /** Sends keyholder texts from the outbox. */
+  callOut: CallOutEngine;
   stop(): Promise<void>;
 }
 
@@ -49,6 +53,11 @@ export async function startStack(options: {
   database: DatabaseConnection;
   clientDir?: string;
   attemptsPerWindow?: number;
+  /**
+   * Whether this stack sends keyholder texts. API test files share one database, so only the
+   * file about texts runs a sender there; otherwise two would race for each other's messages.
+   */
+  sendTexts?: boolean;
 }): Promise<RunningStack> {
   const logger = createLogger(process.env.WARDBOOK_TEST_LOG_LEVEL ?? 'silent', 'test');
   const apiServer = createServer();
@@ -110,6 +119,20 @@ export async function startStack(options: {
         buildId,
       ),
   });
+  const callOut = await startCallOutEngine({
+    enabled: options.sendTexts ?? true,
+    db,
+    logger,
+    sms: createSmsSender({
+      accountSid: LOCAL_TWILIO_ACCOUNT_SID,
+      authToken: secrets.twilioAuthToken,
+      from: LOCAL_TWILIO_FROM,
+      apiBaseUrl: smsUrl,
+    }),
+    statusCallbackUrl: `${apiUrl}/api/webhooks/twilio/status`,
+    connection: options.database,
+    queueName: `keyholder-escalation-${randomBytes(6).toString('hex')}`,
+  });
   const app = createApp({
     db,
     logger,
@@ -127,6 +150,8 @@ export async function startStack(options: {
     idpIssuer: idpUrl,
     sealKeySecret: secrets.sealKeySecret,
     buildQueue,
+    twilioAuthToken: secrets.twilioAuthToken,
+    callOut,
   });
   apiServer.on('request', app);
   viewerServer.on('request', createMailViewer(mailbox));
@@ -140,6 +165,7 @@ export async function startStack(options: {
     smsUrl,
     sms,
     twilioAuthToken: secrets.twilioAuthToken,
+    callOut,
     async stop() {
       sms.close();
       for (const server of servers) {
@@ -147,6 +173,7 @@ export async function startStack(options: {
         await new Promise((resolve) => server.close(resolve));
       }
       await buildQueue.stop();
+      await callOut.stop();
       await new Promise((resolve) => smtp.close(() => resolve(undefined)));
       mailer.close();
       await Promise.all([db.destroy(), sessionPool.end()]);
