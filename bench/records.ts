@@ -107,7 +107,7 @@ export async function seedBenchData(database: {
   return { userId: user.id as string, siteId: middle.id as string, counts: counts.rows[0] };
 }
 
-async function sessionCookie(database: object, userId: string, secret: string) {
+export async function sessionCookie(database: object, userId: string, secret: string) {
   const pool = new pg.Pool({ ...database, max: 1 });
   const sid = randomBytes(24).toString('base64url');
   const expires = new Date(Date.now() + 3_600_000);

@@ -21,6 +21,7 @@ import { createSmtpMailer } from '../server/mail/mailer';
 import { repoRoot } from '../server/paths';
 import { benchPack } from './pack';
 import { benchRecords } from './records';
+import { benchSignals } from './signals';
 
 /**
  * `npm run bench`: prints figures, never passes or fails on them.
@@ -31,6 +32,7 @@ import { benchRecords } from './records';
  *   3. the client's initial JavaScript, gzipped.
  *   4. the as-fitted record at one company's scale (bench/records.ts).
  *   5. the handover pack PDF for a 40-zone site (bench/pack.ts).
+ *   6. alarm signals: receiver throughput and latency, signal to operator screen (bench/signals.ts).
  */
 const RUNS = Number(process.env.BENCH_RUNS ?? 3);
 const median = (values: number[]) => {
@@ -156,7 +158,7 @@ async function initialJavaScriptGzipped() {
 const kib = (bytes: number) => `${(bytes / 1024).toFixed(1)} KiB`;
 
 // `npm run bench -- records` runs only the as-fitted record benchmark; `-- pack` only the
-// handover pack PDF.
+// handover pack PDF; `-- signals` only the alarm signals.
 const only = process.argv[2];
 if (only === 'records') {
   await benchRecords();
@@ -164,6 +166,10 @@ if (only === 'records') {
 }
 if (only === 'pack') {
   await benchPack();
+  process.exit(0);
+}
+if (only === 'signals') {
+  await benchSignals();
   process.exit(0);
 }
 
@@ -189,6 +195,8 @@ console.log(
 await benchRecords();
 
 await benchPack();
+
+await benchSignals();
 
 if (existsSync(path.join(repoRoot, '.data', 'bench-client')))
   rmSync(path.join(repoRoot, '.data', 'bench-client'), { recursive: true });
