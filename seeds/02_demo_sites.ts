@@ -13,6 +13,13 @@ import {
 } from './data/demo-sites';
 
 /**
+ * The demo's encrypted panel: S-0004 (account 1015) sends DC-09 frames AES-128-encrypted with
+ * this key (`npm run simulate -- --account 1015 --key …`). A published demo value: never use it
+ * in a real panel.
+ */
+const DEMO_DC09_KEY = '00112233445566778899AABBCCDDEEFF';
+
+/**
  * The demo installer's sites, once: only while the demo installer exists and no site has been
  * recorded by anyone yet.
  */
@@ -76,6 +83,9 @@ export async function seed(knex: Knex, context: SeedContext = {}): Promise<void>
           monitoring_account: plan.monitored
             ? (0x1000 + index * 7).toString(16).toUpperCase()
             : null,
+          // S-0001 stays plain, so the README's first `npm run simulate` works as written.
+          dc09_key: plan.monitored && index === 3 ? DEMO_DC09_KEY : null,
+          test_interval_minutes: index === 0 ? 24 * 60 : null,
         })
         .returning<{ id: string }[]>('id');
       const siteId = site!.id;

@@ -33,6 +33,7 @@ import { createOrganisationsRouter } from './organisations/routes';
 import type { PackBuildQueue } from './handover/build-queue';
 import { createHandoverRouter, createVerifyRouter } from './handover/routes';
 import { createMonitoringRouter } from './monitoring/routes';
+import { createSignallingCredentialsRouter } from './monitoring/credentials/routes';
 import { createTwilioWebhookRouter } from './monitoring/callout/webhooks';
 import { createKeyholderAlertsRouter } from './keyholder-alerts/routes';
 import { createSignalHistoryRouter } from './signal-history/routes';
@@ -142,6 +143,7 @@ export function createApp(deps: AppDeps): Express {
     }),
   );
   app.use(createMonitoringRouter(deps));
+  app.use(createSignallingCredentialsRouter(deps));
   app.use(createKeyholderAlertsRouter(deps));
   app.use(createSignalHistoryRouter(deps));
   app.use('/api', apiNotFound);

@@ -1,7 +1,12 @@
+import { readFileSync } from 'node:fs';
+import path from 'node:path';
 import { parseArgs } from 'node:util';
+import { loadConfig } from '../config/config';
+import { DC09_KEY_PATTERN } from '../monitoring/credentials/schema';
 import {
   contactIdMessage,
   describeReply,
+  postToIntake,
   sendFrame,
   simulatedFrame,
   type SimulatedSignal,
@@ -20,6 +25,10 @@ const { values } = parseArgs({
     partition: { type: 'string', default: '1' },
     restore: { type: 'boolean', default: false },
     sequence: { type: 'string' },
+    key: { type: 'string' },
+    https: { type: 'boolean', default: false },
+    token: { type: 'string' },
+    'intake-port': { type: 'string', default: process.env.WARDBOOK_INTAKE_PORT ?? '7443' },
     help: { type: 'boolean', default: false },
   },
 });
@@ -32,6 +41,10 @@ const USAGE = `Usage: npm run simulate -- [options]
   --partition <n>      partition or area (default 1)
   --restore            send the restore instead of the new event
   --sequence <n>       sequence number (default: from the clock)
+  --key <hex>          the account's DC-09 AES key (32, 48 or 64 hex digits): sends the
+                       encrypted frame and decrypts the reply
+  --https --token <t>  posts the event to the HTTPS intake instead, with the site's intake
+                       token (--intake-port, default 7443)
   --host, --port       receiver address (default 127.0.0.1:7100)`;
 
 if (values.help) {
@@ -68,14 +81,50 @@ const signal: SimulatedSignal = {
   receiver: '1',
   linePrefix: '1',
 };
-const frame = simulatedFrame(signal);
-console.log(`sending  ${JSON.stringify(frame)}`);
+const key = values.key?.toUpperCase();
+if (key !== undefined && !DC09_KEY_PATTERN.test(key)) {
+  console.error('--key is 32, 48 or 64 hex digits (AES-128, AES-192 or AES-256).');
+  process.exit(1);
+}
+
+if (values.https) {
+  if (!values.token || format === 'null') {
+    console.error(
+      '--https needs --token <the site’s intake token>, and an event (not --format null).',
+    );
+    process.exit(1);
+  }
+  const certPath = path.join(loadConfig().dataDir, 'intake-tls', 'cert.pem');
+  let ca: string;
+  try {
+    ca = readFileSync(certPath, 'utf8');
+  } catch {
+    console.error(`No intake certificate at ${certPath}: start Wardbook (npm start) first.`);
+    process.exit(1);
+  }
+  try {
+    const reply = await postToIntake(signal, {
+      host: values.host!,
+      port: Number(values['intake-port']),
+      token: values.token,
+      ca,
+    });
+    console.log(`reply    ${reply.status} ${JSON.stringify(reply.body)}`);
+    process.exit(reply.status < 300 ? 0 : 1);
+  } catch (error) {
+    console.error(`Could not reach the intake: ${(error as Error).message}`);
+    process.exit(1);
+  }
+}
+
+const frame = simulatedFrame(signal, new Date(), key);
+console.log(`sending  ${JSON.stringify(frame)}${key ? ' (encrypted)' : ''}`);
 if (format === 'adm-cid')
   console.log(`(as a Contact ID line message: ${contactIdMessage(signal)})`);
 try {
   const reply = await sendFrame(frame, { host: values.host!, port: Number(values.port) });
   console.log(`reply    ${JSON.stringify(reply)}`);
-  console.log(`         ${describeReply(reply)}`);
+  console.log(`         ${describeReply(reply, key)}`);
 } catch (error) {
   console.error(`Could not reach the receiver: ${(error as Error).message}`);
   process.exit(1);

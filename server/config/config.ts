@@ -28,6 +28,8 @@ const environmentSchema = z.object({
   WARDBOOK_TWILIO_PORT: port.default(1090),
   /** The SIA DC-09 alarm receiver (TCP). */
   WARDBOOK_RECEIVER_PORT: port.default(7100),
+  /** The HTTPS intake for IP communicators posting signals as JSON (loopback, self-signed). */
+  WARDBOOK_INTAKE_PORT: port.default(7443),
   WARDBOOK_DEV_PORT: port.default(5173),
   /** Origin the browser uses for the app; the OIDC redirect comes back here. */
   WARDBOOK_PUBLIC_URL: origin.optional(),
@@ -46,7 +48,7 @@ export interface Config {
   api: { port: number; publicUrl: string; clientDir: string };
   idp: { port: number; issuer: string; appOrigins: string[] };
   mail: { smtpHost: string; smtpPort: number; viewerPort: number; from: string };
-  monitoring: { receiverPort: number };
+  monitoring: { receiverPort: number; intakePort: number };
   twilio: {
     port: number;
     /** Where the SDK's requests go: the local fake's origin. */
@@ -108,7 +110,10 @@ export function loadConfig(source: NodeJS.ProcessEnv = process.env): Config {
       viewerPort: env.WARDBOOK_MAIL_VIEWER_PORT,
       from: env.WARDBOOK_MAIL_FROM,
     },
-    monitoring: { receiverPort: env.WARDBOOK_RECEIVER_PORT },
+    monitoring: {
+      receiverPort: env.WARDBOOK_RECEIVER_PORT,
+      intakePort: env.WARDBOOK_INTAKE_PORT,
+    },
     twilio: {
       port: env.WARDBOOK_TWILIO_PORT,
       apiBaseUrl: `http://127.0.0.1:${env.WARDBOOK_TWILIO_PORT}`,

@@ -1,4 +1,6 @@
 import type { Knex } from 'knex';
+import { startAutomaticCallOut } from './callout/service';
+import { noteSignalAfterMissedTest } from './missed-test-restore';
 import type { SignalCategory } from './protocol/contact-id';
 import type { IncomingSignal } from './repository';
 
@@ -52,13 +54,17 @@ export async function fileSignal(
   signal: IncomingSignal,
   siteId: string | null,
 ): Promise<string | null> {
-  if (signal.category === 'test' || signal.category === 'open_close') return null;
+  // Any signal shows the path works: an open missed-test fault is marked restored.
+  const pathRestored = siteId
+    ? await noteSignalAfterMissedTest(trx, siteId, signal.category)
+    : null;
+  if (signal.category === 'test' || signal.category === 'open_close') return pathRestored;
   const category = signal.category as EventCategory;
   const zone = signal.zoneOrUser;
 
   if (signal.qualifier === 'restore') {
     const restored = await trx('alarm_events')
-      .where({ account: signal.account, category })
+      .where({ account: signal.account, category, raised_by_missed_test: false })
       .whereNot({ status: 'closed' })
       .whereNull('restored_at')
       .modify((query) => {
@@ -79,7 +85,7 @@ export async function fileSignal(
     : undefined;
   const windowMinutes = Number(site?.confirmation_window_minutes ?? DEFAULT_WINDOW_MINUTES);
   const open: OpenEvent | undefined = await trx('alarm_events')
-    .where({ account: signal.account, category })
+    .where({ account: signal.account, category, raised_by_missed_test: false })
     .whereNot({ status: 'closed' })
     .where('first_signal_at', '>', trx.raw(`now() - make_interval(mins => ?)`, [windowMinutes]))
     .orderBy('first_signal_at', 'desc')
@@ -133,5 +139,7 @@ export async function fileSignal(
     'received',
     `${CATEGORY_WORDS[category]}${zoneWords(zone)}, account ${signal.account}${siteId ? '' : ' (no site has this account: check it)'}.`,
   );
+  // Centres that choose to text keyholders at once do so in this same transaction (outbox).
+  if (siteId) await startAutomaticCallOut(trx, created!.id);
   return created!.id;
 }

@@ -1,7 +1,7 @@
 import type { Knex } from 'knex';
 import type { Notification, Client } from 'pg';
 import type { Logger } from 'pino';
-import { SIGNALS_CHANNEL } from './repository';
+import { SIGNALS_CHANNEL } from './channel';
 
 export interface LiveChange {
   eventId: string | null;

@@ -1,9 +1,11 @@
 import { createServer, type Server, type Socket } from 'node:net';
 import type { Knex } from 'knex';
 import type { Logger } from 'pino';
-import { parseAdmCidData, parseSiaDcsData } from './protocol/contact-id';
+import { dc09KeyForAccount } from './credentials/repository';
 import { ackFor, duhFor, MAX_FRAME_CHARS, nak, parseFrame, type Dc09Frame } from './protocol/dc09';
+import { decryptFrame, encryptedAckFor } from './protocol/dc09-encryption';
 import { recordSignal, type IncomingSignal } from './repository';
+import { readSignalContent } from './signal-content';
 
 export interface ReceiverOptions {
   db: Knex;
@@ -27,8 +29,10 @@ export const CLOCK_BEHIND_MS = 40_000;
 type Reply = { reply: string; outcome: string };
 
 function toIncoming(frame: Dc09Frame, raw: string): IncomingSignal | undefined {
-  const common = {
-    transport: 'dc09_tcp' as const,
+  const content = readSignalContent(frame.id, frame.data);
+  if (!content) return undefined;
+  return {
+    transport: 'dc09_tcp',
     protocol: frame.id,
     account: frame.account,
     sequence: frame.sequence,
@@ -38,35 +42,32 @@ function toIncoming(frame: Dc09Frame, raw: string): IncomingSignal | undefined {
     wasEncrypted: frame.encrypted,
     panelTime: frame.timestamp,
     raw,
+    eventCode: content.eventCode,
+    category: content.category,
+    qualifier: content.qualifier,
+    zoneOrUser: content.zoneOrUser,
+    partition: content.partition,
   };
-  if (frame.id === 'ADM-CID') {
-    const event = parseAdmCidData(frame.data);
-    if (!event) return undefined;
-    return {
-      ...common,
-      eventCode: event.code,
-      category: event.category,
-      qualifier: event.qualifier,
-      zoneOrUser: event.zoneOrUser,
-      partition: event.partition,
-    };
-  }
-  if (frame.id === 'SIA-DCS') {
-    const event = parseSiaDcsData(frame.data);
-    if (!event) return undefined;
-    return {
-      ...common,
-      eventCode: event.code,
-      category: event.category,
-      qualifier: event.qualifier,
-      zoneOrUser: event.zoneOrUser,
-      partition: event.area,
-    };
-  }
-  return undefined;
 }
 
-/** Decides the reply to one frame; a signal is committed before its ACK is returned. */
+/**
+ * Decides the reply to one frame; a signal is committed before its ACK is returned.
+ *
+ * Encryption is per account. An encrypted frame is decrypted with the account's key and then
+ * checked like any plain frame; its ACK is encrypted too. When the account has no key, or the
+ * frame does not decrypt to a DC-09 message with its timestamp, the answer is DUH, not NAK:
+ * SIA DC-09 keeps NAK for frames refused in transit (CRC, length, clock; from memory), and NAK
+ * carries the receiver's time so the panel corrects its clock and resends, which cannot help when
+ * the key is missing or wrong. (pysiaalarm answers NAK here, src/pysiaalarm/base_server.py; a
+ * panel stops resending on either, and DUH tells the installer what is wrong.) NAK and DUH go in
+ * clear, as pysiaalarm sends them: without a shared key there is nothing to encrypt them with.
+ *
+ * An account that has a key but sends a plain frame gets DUH too, and nothing is stored: a
+ * configured key is the centre's statement that this panel encrypts, so a plain frame is either a
+ * misconfigured panel or someone else using the account number, and accepting it would let
+ * anyone bypass the encryption by leaving it off (sensible practice; DC-09 leaves it to the
+ * receiver).
+ */
 export async function handleFrame(
   options: Pick<ReceiverOptions, 'db' | 'now'>,
   raw: string,
@@ -78,20 +79,28 @@ export async function handleFrame(
       return { reply: duhFor(parsed.header), outcome: `duh:${parsed.problem}` };
     return { reply: nak(now), outcome: `nak:${parsed.problem}` };
   }
-  const { frame } = parsed;
+  const key = await dc09KeyForAccount(options.db, parsed.frame.account);
+  let frame = parsed.frame;
+  if (frame.encrypted) {
+    if (!key) return { reply: duhFor(frame), outcome: 'duh:no-key' };
+    const decrypted = decryptFrame(frame, key);
+    if (!decrypted.ok) return { reply: duhFor(frame), outcome: 'duh:undecryptable' };
+    frame = decrypted.frame;
+  } else if (key) {
+    return { reply: duhFor(frame), outcome: 'duh:plain-from-keyed-account' };
+  }
   if (frame.timestamp) {
     const skew = frame.timestamp.getTime() - now.getTime();
     if (skew > CLOCK_AHEAD_MS || skew < -CLOCK_BEHIND_MS)
       return { reply: nak(now), outcome: 'nak:clock' };
   }
-  if (frame.id === 'NULL') return { reply: ackFor(frame), outcome: 'ack:link-test' };
-  // Encrypted frames need the account's key; until one is configured they are not understood.
-  if (frame.encrypted) return { reply: duhFor(frame), outcome: 'duh:encrypted' };
+  const ack = () => (frame.encrypted ? encryptedAckFor(frame, key!, now) : ackFor(frame));
+  if (frame.id === 'NULL') return { reply: ack(), outcome: 'ack:link-test' };
   const signal = toIncoming(frame, raw);
   if (!signal) return { reply: duhFor(frame), outcome: `duh:${frame.id}` };
   const stored = await recordSignal(options.db, signal);
   return {
-    reply: ackFor(frame),
+    reply: ack(),
     outcome: stored.duplicate ? 'ack:duplicate' : stored.siteId ? 'ack:stored' : 'ack:unknown',
   };
 }

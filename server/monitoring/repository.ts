@@ -1,4 +1,5 @@
 import type { Knex } from 'knex';
+import { SIGNALS_CHANNEL } from './channel';
 import { fileSignal } from './events';
 import type { Qualifier, SignalCategory } from './protocol/contact-id';
 
@@ -26,7 +27,7 @@ export interface IncomingSignal {
  */
 export const DUPLICATE_WINDOW_MINUTES = 10;
 
-export const SIGNALS_CHANNEL = 'wardbook_signals';
+export { SIGNALS_CHANNEL };
 
 /**
  * Stores a signal once and commits before returning, so the caller may acknowledge it. A resend

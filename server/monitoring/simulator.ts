@@ -1,6 +1,8 @@
+import { request } from 'node:https';
 import { connect } from 'node:net';
 import { contactIdChecksum } from './protocol/contact-id';
 import { buildFrame, parseFrame } from './protocol/dc09';
+import { buildEncryptedFrame, decryptFrame } from './protocol/dc09-encryption';
 
 export interface SimulatedSignal {
   format: 'adm-cid' | 'sia-dcs' | 'null';
@@ -17,25 +19,33 @@ export interface SimulatedSignal {
 
 const QUALIFIER_DIGIT = { new: '1', restore: '3' } as const;
 
-/** The DC-09 frame a panel would send for this event. */
-export function simulatedFrame(signal: SimulatedSignal, now = new Date()): string {
+/** The event as DC-09 data: `#acct|Q XYZ GG CCC` (Contact ID) or `#acct|Nri…/CCzz` (SIA). */
+export function simulatedData(signal: SimulatedSignal): string {
   const pad = (value: number, width: number) => String(value).padStart(width, '0');
-  const data =
-    signal.format === 'adm-cid'
-      ? `#${signal.account}|${QUALIFIER_DIGIT[signal.qualifier]}${signal.code} ${pad(signal.partition, 2)} ${pad(signal.zone, 3)}`
-      : signal.format === 'sia-dcs'
-        ? `#${signal.account}|Nri${signal.partition}/${signal.code}${pad(signal.zone, 2)}`
-        : '';
-  return buildFrame({
+  if (signal.format === 'adm-cid')
+    return `#${signal.account}|${QUALIFIER_DIGIT[signal.qualifier]}${signal.code} ${pad(signal.partition, 2)} ${pad(signal.zone, 3)}`;
+  if (signal.format === 'sia-dcs')
+    return `#${signal.account}|Nri${signal.partition}/${signal.code}${pad(signal.zone, 2)}`;
+  return '';
+}
+
+/**
+ * The DC-09 frame a panel would send for this event; with the account's key (hex), the
+ * encrypted form.
+ */
+export function simulatedFrame(signal: SimulatedSignal, now = new Date(), key?: string): string {
+  const pad = (value: number, width: number) => String(value).padStart(width, '0');
+  const data = simulatedData(signal);
+  const frame = {
     id: signal.format === 'adm-cid' ? 'ADM-CID' : signal.format === 'sia-dcs' ? 'SIA-DCS' : 'NULL',
-    encrypted: false,
     sequence: pad(signal.sequence % 10_000, 4),
     receiver: signal.receiver,
     linePrefix: signal.linePrefix,
     account: signal.account,
     data,
     timestamp: now,
-  });
+  };
+  return key ? buildEncryptedFrame(frame, key) : buildFrame({ ...frame, encrypted: false });
 }
 
 /** The 16-digit Contact ID message the same event would be over a telephone line, with S. */
@@ -74,8 +84,69 @@ export function sendFrame(
   });
 }
 
-export function describeReply(reply: string): string {
+/** The reply in words; an encrypted reply is decrypted with the key the frame was sent with. */
+export function describeReply(reply: string, key?: string): string {
   const parsed = parseFrame(reply);
   if (!parsed.ok) return `unreadable reply (${parsed.problem}): ${JSON.stringify(reply)}`;
-  return `${parsed.frame.id} for sequence ${parsed.frame.sequence}, account ${parsed.frame.account}`;
+  const { frame } = parsed;
+  const about = `for sequence ${frame.sequence}, account ${frame.account}`;
+  if (!frame.encrypted) return `${frame.id} ${about}`;
+  if (!key) return `${frame.id} ${about} (encrypted; give --key to read it)`;
+  const decrypted = decryptFrame(frame, key);
+  if (!decrypted.ok)
+    return `${frame.id} ${about} (encrypted, but not readable: ${decrypted.detail})`;
+  return `${frame.id} ${about} (encrypted; receiver time ${decrypted.frame.timestamp!.toISOString()})`;
+}
+
+/**
+ * Posts the event to the HTTPS intake as an IP communicator would, trusting the intake's own
+ * certificate (`ca`); resolves with the status and the parsed reply.
+ */
+export function postToIntake(
+  signal: SimulatedSignal,
+  options: { host: string; port: number; token: string; ca: string; timeoutMs?: number },
+  now = new Date(),
+): Promise<{ status: number; body: unknown }> {
+  if (signal.format === 'null') return Promise.reject(new Error('the intake takes no link tests'));
+  const payload = JSON.stringify({
+    account: signal.account,
+    sequence: signal.sequence % 10_000,
+    format: signal.format === 'adm-cid' ? 'ADM-CID' : 'SIA-DCS',
+    data: simulatedData(signal),
+    timestamp: now.toISOString(),
+  });
+  return new Promise((resolve, reject) => {
+    const outgoing = request(
+      {
+        host: options.host,
+        port: options.port,
+        path: '/v1/signals',
+        method: 'POST',
+        ca: options.ca,
+        timeout: options.timeoutMs ?? 10_000,
+        headers: {
+          authorization: `Bearer ${options.token}`,
+          'content-type': 'application/json',
+          'content-length': Buffer.byteLength(payload),
+        },
+      },
+      (response) => {
+        let text = '';
+        response.setEncoding('utf8');
+        response.on('data', (chunk: string) => (text += chunk));
+        response.on('end', () => {
+          let body: unknown = text;
+          try {
+            body = JSON.parse(text);
+          } catch {
+            // Not JSON: shown as it came.
+          }
+          resolve({ status: response.statusCode ?? 0, body });
+        });
+      },
+    );
+    outgoing.on('timeout', () => outgoing.destroy(new Error('no reply from the intake in time')));
+    outgoing.on('error', reject);
+    outgoing.end(payload);
+  });
 }

@@ -798,6 +798,20 @@ const MATRIX: Record<string, Entry> = {
       body: { outcome: 'test_or_engineer', note: 'Matrix check.' },
     }),
   },
+  // Clearing the key keeps the sites' panels on plain frames for the rest of this file.
+  'PUT /api/monitoring/sites/:siteId/signalling-credentials': {
+    allowed: ['operator'],
+    scoped: true,
+    call: async (target) => ({
+      path: `/api/monitoring/sites/${site(target).siteId}/signalling-credentials`,
+      body: { dc09Key: null },
+    }),
+  },
+  'POST /api/monitoring/sites/:siteId/intake-token': {
+    allowed: ['operator'],
+    scoped: true,
+    call: async (target) => ({ path: `/api/monitoring/sites/${site(target).siteId}/intake-token` }),
+  },
   'POST /api/monitoring/events/:eventId/call-out': {
     allowed: ['operator'],
     scoped: true,

@@ -255,6 +255,27 @@ describe('messaging keyholders', () => {
     );
     await closeEvent(eventId);
   });
+  it('texts the first keyholder straight from the signal where the centre chooses that', async () => {
+    const [first] = await freshKeyholders(world.own.siteId, 1);
+    await db('organisations').where({ id: world.centre.id }).update({ callout_automatic: true });
+    try {
+      const eventId = await alarmFromSite(db, world.own.siteId, 1);
+      // The receiver queued it in the signal's own transaction; the sender hears the NOTIFY.
+      await expect.poll(() => textsTo(first!).length).toBe(1);
+      expect((await db('alarm_events').where({ id: eventId }).first()).callout_status).toBe(
+        'calling',
+      );
+      expect(await timelineOf(eventId)).toContain(
+        'Messaging keyholders automatically, 2 minutes for each to accept.',
+      );
+      await db('alarm_events')
+        .where({ id: eventId })
+        .update({ status: 'taken', taken_by: world.operator.userId });
+      await closeEvent(eventId);
+    } finally {
+      await db('organisations').where({ id: world.centre.id }).update({ callout_automatic: false });
+    }
+  });
 });
 
 describe('Twilio webhooks', () => {

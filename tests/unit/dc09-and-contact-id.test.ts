@@ -144,7 +144,7 @@ describe('SIA DC-09 frames', () => {
       fc.property(
         fc.record({
           id: fc.constantFrom('SIA-DCS', 'ADM-CID', 'NULL'),
-          encrypted: fc.boolean(),
+          encrypted: fc.constant(false),
           sequence: fc.integer({ min: 0, max: 9999 }).map((n) => String(n).padStart(4, '0')),
           receiver: fc.option(hex(1, 6), { nil: null }),
           linePrefix: hex(1, 6),
@@ -167,6 +167,44 @@ describe('SIA DC-09 frames', () => {
         },
       ),
       { numRuns: 2_000 },
+    );
+    // The encrypted form: the header, `[`, the ciphertext's hex and nothing after it.
+    fc.assert(
+      fc.property(
+        fc.record({
+          id: fc.constantFrom('SIA-DCS', 'ADM-CID', 'NULL'),
+          encrypted: fc.constant(true),
+          sequence: fc.integer({ min: 0, max: 9999 }).map((n) => String(n).padStart(4, '0')),
+          receiver: fc.option(hex(1, 6), { nil: null }),
+          linePrefix: hex(1, 6),
+          account: hex(3, 16),
+          data: fc.integer({ min: 1, max: 12 }).chain((blocks) => hex(blocks * 32, blocks * 32)),
+          extended: fc.constant<string[]>([]),
+          timestamp: fc.constant(null),
+        }),
+        (frame) => {
+          const text = buildFrame(frame);
+          expect(text).toMatch(/\[[0-9A-F]+\r$/);
+          expect(parseFrame(text)).toEqual({ ok: true, frame });
+        },
+      ),
+      { numRuns: 1_000 },
+    );
+  });
+
+  it('never throws on random text after a `*` message ID (10,000 frames with a good CRC)', () => {
+    // Whatever follows "*ADM-CID" and the header, framed with a correct CRC and length, is
+    // read or refused, never thrown on.
+    fc.assert(
+      fc.property(
+        fc.constantFrom('*ADM-CID', '*SIA-DCS', '*NULL', '*'),
+        fc.string({ maxLength: 600 }),
+        (id, rest) => {
+          const parsed = parseFrame(wrapBody(`"${id}"0001R1L1#1234[${rest}`));
+          expect(typeof parsed.ok).toBe('boolean');
+        },
+      ),
+      { numRuns: 10_000 },
     );
   });
 });
@@ -223,5 +261,22 @@ describe('Contact ID', () => {
     });
     expect(parseAdmCidData('#1234|9131 01 015')).toBeUndefined();
     expect(parseAdmCidData('')).toBeUndefined();
+  });
+
+  it('reads data that leaves the account out before the |', () => {
+    // eavanvalkenburg/pysiaalarm tests/test_sia_package_cases.py, case_cl:
+    // "SIA-DCS"6002L0#AAA[|Nri1/CL501]_14:12:04,09-25-2019 is a closing report (CL).
+    expect(parseSiaDcsData('|Nri1/CL501')).toMatchObject({
+      account: null,
+      code: 'CL',
+      area: 1,
+      category: 'open_close',
+    });
+    expect(parseAdmCidData('|1130 01 003')).toMatchObject({
+      account: null,
+      code: '130',
+      zoneOrUser: 3,
+      category: 'burglary',
+    });
   });
 });

@@ -65,12 +65,13 @@ export function isValidContactIdMessage(message: string): boolean {
 
 /**
  * The data of an ADM-CID frame: `#acct|Q XYZ GG CCC`, spaces optional, e.g.
- * `#1234|1131 01 015` (new burglary, partition 1, zone 15). Undefined when it is not that.
+ * `#1234|1131 01 015` (new burglary, partition 1, zone 15). The account may be left out,
+ * leaving `|Q XYZ GG CCC` (as decrypted frames give it). Undefined when it is not that.
  */
 export function parseAdmCidData(
   data: string,
 ): (ContactIdEvent & { account: string | null }) | undefined {
-  const match = /^(?:#([0-9A-F]{3,16})\|)?([136])\s?(\d{3})\s?(\d{2})\s?(\d{3})$/i.exec(
+  const match = /^(?:(?:#([0-9A-F]{3,16}))?\|)?([136])\s?(\d{3})\s?(\d{2})\s?(\d{3})$/i.exec(
     data.trim(),
   );
   if (!match) return undefined;
@@ -117,9 +118,9 @@ export interface SiaEvent {
   qualifier: Qualifier;
 }
 
-/** The data of a SIA-DCS frame, e.g. `#12345A|NFA129` or `#1234|Nri1/BA05`. */
+/** The data of a SIA-DCS frame, e.g. `#12345A|NFA129`, `#1234|Nri1/BA05` or `|Nri1/CL501`. */
 export function parseSiaDcsData(data: string): SiaEvent | undefined {
-  const match = /^(?:#([0-9A-F]{3,16})\|)?N(?:ri(\d{1,3})\/?)?([A-Z]{2})(\d{0,4})/i.exec(
+  const match = /^(?:(?:#([0-9A-F]{3,16}))?\|)?N(?:ri(\d{1,3})\/?)?([A-Z]{2})(\d{0,4})/i.exec(
     data.trim(),
   );
   if (!match) return undefined;

@@ -9,6 +9,10 @@ import { crc16 } from 'crc';
  * where CRC is CRC-16/ARC as four hex digits and LLL the length in hex, both over everything
  * from the opening quote to the end of the timestamp. Nothing here throws on bad input: every
  * problem comes back as a reason, so a hostile or garbled frame cannot stop the receiver.
+ *
+ * An encrypted frame ("*" before the ID) ends at its `[`, followed by the hex of the AES
+ * ciphertext; its data, `]`, extended data and timestamp are inside that ciphertext
+ * (dc09-encryption.ts reads them once the account's key is known).
  */
 
 export const LF = '\n';
@@ -25,7 +29,7 @@ export interface Dc09Frame {
   receiver: string | null;
   linePrefix: string;
   account: string;
-  /** Between the first [ and its ]: for an encrypted frame, the hex ciphertext. */
+  /** Between the first [ and its ]: for an encrypted frame, the hex ciphertext after the [. */
   data: string;
   /** Extended data blocks such as [X…] and [Y…], without brackets. */
   extended: string[];
@@ -46,7 +50,12 @@ export type Dc09Parse =
     };
 
 const BODY =
-  /^"(\*?)([A-Z0-9-]{3,12})"(\d{4})(?:R([0-9A-F]{1,6}))?L([0-9A-F]{1,6})#([0-9A-F]{3,16})\[([^\]]*)\]((?:\[[^\]]*\])*)(?:_(\d{2}):(\d{2}):(\d{2}),(\d{2})-(\d{2})-(\d{4}))?$/;
+  /^"([A-Z0-9-]{3,12})"(\d{4})(?:R([0-9A-F]{1,6}))?L([0-9A-F]{1,6})#([0-9A-F]{3,16})\[([^\]]*)\]((?:\[[^\]]*\])*)(?:_(\d{2}):(\d{2}):(\d{2}),(\d{2})-(\d{2})-(\d{4}))?$/;
+
+/** The encrypted form: the header, `[`, then hex to the end (pysiaalarm's test frames, and
+ *  jvanovost/dc09_spt's dc09block, send nothing after the ciphertext). */
+const ENCRYPTED_BODY =
+  /^"\*([A-Z0-9-]{3,12})"(\d{4})(?:R([0-9A-F]{1,6}))?L([0-9A-F]{1,6})#([0-9A-F]{3,16})\[([0-9A-Fa-f]*)$/;
 
 const HEADER = /"\*?[A-Z0-9-]{3,12}"(\d{4})(?:R([0-9A-F]{1,6}))?L([0-9A-F]{1,6})#([0-9A-F]{3,16})/;
 
@@ -79,12 +88,30 @@ export function parseFrame(raw: string): Dc09Parse {
   if (Number.parseInt(lengthField, 16) !== body.length)
     return fail('length', `length says ${lengthField}, body is ${body.length} characters`, body);
   if (crcOf(body) !== crc) return fail('crc', `CRC says ${crc}, body gives ${crcOf(body)}`, body);
+  const encrypted = ENCRYPTED_BODY.exec(body);
+  if (encrypted) {
+    const [, id, sequence, receiver, linePrefix, account, ciphertext] = encrypted;
+    return {
+      ok: true,
+      frame: {
+        id: id!,
+        encrypted: true,
+        sequence: sequence!,
+        receiver: receiver ?? null,
+        linePrefix: linePrefix!,
+        account: account!,
+        data: ciphertext!,
+        extended: [],
+        timestamp: null,
+      },
+    };
+  }
   const match = BODY.exec(body);
   if (!match) return fail('format', 'the body does not follow the DC-09 layout', body);
-  const [, star, id, sequence, receiver, linePrefix, account, data, extendedText] = match;
+  const [, id, sequence, receiver, linePrefix, account, data, extendedText] = match;
   let timestamp: Date | null = null;
-  if (match[9] !== undefined) {
-    const [hh, mm, ss, month, day, year] = match.slice(9, 15).map(Number) as number[];
+  if (match[8] !== undefined) {
+    const [hh, mm, ss, month, day, year] = match.slice(8, 14).map(Number) as number[];
     timestamp = new Date(Date.UTC(year!, month! - 1, day!, hh!, mm!, ss!));
     const valid =
       timestamp.getUTCMonth() === month! - 1 &&
@@ -98,7 +125,7 @@ export function parseFrame(raw: string): Dc09Parse {
     ok: true,
     frame: {
       id: id!,
-      encrypted: star === '*',
+      encrypted: false,
       sequence: sequence!,
       receiver: receiver ?? null,
       linePrefix: linePrefix!,
@@ -122,12 +149,20 @@ export function wrapBody(body: string): string {
   return `${LF}${crcOf(body)}${length}${body}${CR}`;
 }
 
+/**
+ * Builds a frame. For an encrypted one, `data` is the ciphertext's hex and nothing follows it
+ * (dc09-encryption.ts makes it); its extended data and timestamp travel inside.
+ */
 export function buildFrame(frame: Omit<Dc09Frame, 'extended'> & { extended?: string[] }): string {
   const receiver = frame.receiver === null ? '' : `R${frame.receiver}`;
+  if (frame.encrypted)
+    return wrapBody(
+      `"*${frame.id}"${frame.sequence}${receiver}L${frame.linePrefix}#${frame.account}[${frame.data}`,
+    );
   const extended = (frame.extended ?? []).map((block) => `[${block}]`).join('');
   const time = frame.timestamp ? formatTimestamp(frame.timestamp) : '';
   return wrapBody(
-    `"${frame.encrypted ? '*' : ''}${frame.id}"${frame.sequence}${receiver}L${frame.linePrefix}#${frame.account}[${frame.data}]${extended}${time}`,
+    `"${frame.id}"${frame.sequence}${receiver}L${frame.linePrefix}#${frame.account}[${frame.data}]${extended}${time}`,
   );
 }
 
