@@ -21,6 +21,7 @@ import { createSmtpMailer } from '../server/mail/mailer';
 import { repoRoot } from '../server/paths';
 import { benchPack } from './pack';
 import { benchRecords } from './records';
+import { benchOperatorScreen } from './operator-screen';
 import { benchSignals } from './signals';
 
 /**
@@ -33,6 +34,7 @@ import { benchSignals } from './signals';
  *   4. the as-fitted record at one company's scale (bench/records.ts).
  *   5. the handover pack PDF for a 40-zone site (bench/pack.ts).
  *   6. alarm signals: receiver throughput and latency, signal to operator screen (bench/signals.ts).
+ *   7. a signal drawn in the operator's browser, Chromium included (bench/operator-screen.ts).
  */
 const RUNS = Number(process.env.BENCH_RUNS ?? 3);
 const median = (values: number[]) => {
@@ -158,7 +160,8 @@ async function initialJavaScriptGzipped() {
 const kib = (bytes: number) => `${(bytes / 1024).toFixed(1)} KiB`;
 
 // `npm run bench -- records` runs only the as-fitted record benchmark; `-- pack` only the
-// handover pack PDF; `-- signals` only the alarm signals.
+// handover pack PDF; `-- signals` only the alarm signals; `-- operator-screen` only the
+// signal-to-browser latency.
 const only = process.argv[2];
 if (only === 'records') {
   await benchRecords();
@@ -170,6 +173,10 @@ if (only === 'pack') {
 }
 if (only === 'signals') {
   await benchSignals();
+  process.exit(0);
+}
+if (only === 'operator-screen') {
+  await benchOperatorScreen();
   process.exit(0);
 }
 
@@ -200,3 +207,5 @@ await benchSignals();
 
 if (existsSync(path.join(repoRoot, '.data', 'bench-client')))
   rmSync(path.join(repoRoot, '.data', 'bench-client'), { recursive: true });
+
+await benchOperatorScreen();

@@ -49,6 +49,8 @@ export const alarmEventSchema = z.object({
   lastSignalAt: z.string(),
   restoredAt: z.string().nullable(),
   takenBy: z.string().nullable(),
+  /** Who has it, so a screen can tell the operator's own events from a namesake's. */
+  takenById: z.string().nullable(),
   closedAt: z.string().nullable(),
   outcome: z.string().nullable(),
 });

@@ -41,6 +41,7 @@ function toEvent(row: Record<string, unknown>): AlarmEvent {
     lastSignalAt: iso(row.last_signal_at)!,
     restoredAt: iso(row.restored_at),
     takenBy: (row.taken_by_name as string | null) ?? null,
+    takenById: (row.taken_by as string | null) ?? null,
     closedAt: iso(row.closed_at),
     outcome: (row.outcome as string | null) ?? null,
   };

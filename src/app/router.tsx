@@ -156,6 +156,10 @@ function myHomeRoutes(queryClient: QueryClient): RouteObject[] {
           lazy: screen(queryClient, () => import('@/app/routes/app/homes/my-home-files')),
         },
         {
+          path: 'signals',
+          lazy: screen(queryClient, () => import('@/app/routes/app/homes/my-home-signals')),
+        },
+        {
           path: 'request',
           lazy: screen(queryClient, () => import('@/app/routes/app/homes/my-home-request')),
         },
@@ -180,9 +184,20 @@ function homeownerRoutes(queryClient: QueryClient): RouteObject[] {
   ];
 }
 
+// Operators: the queue is their home; each alarm event opens on a page of its own.
+function operatorRoutes(queryClient: QueryClient): RouteObject[] {
+  return [
+    {
+      path: paths.monitoringEvent.path,
+      lazy: screen(queryClient, () => import('@/app/routes/app/monitoring/alarm-event')),
+    },
+  ];
+}
+
 const roleSubRoutes: Partial<Record<Role, (queryClient: QueryClient) => RouteObject[]>> = {
   engineer: staffRoutes,
   office: officeRoutes,
+  operator: operatorRoutes,
   homeowner: homeownerRoutes,
 };
 

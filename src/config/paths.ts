@@ -12,7 +12,14 @@ export const SITE_SECTIONS = [
   'handover',
 ] as const;
 export type SiteSection = (typeof SITE_SECTIONS)[number];
-export const MY_HOME_SECTIONS = ['zones', 'keyholders', 'user-codes', 'files', 'request'] as const;
+export const MY_HOME_SECTIONS = [
+  'zones',
+  'keyholders',
+  'user-codes',
+  'files',
+  'signals',
+  'request',
+] as const;
 export type MyHomeSection = (typeof MY_HOME_SECTIONS)[number];
 
 function withQuery(path: string, query: Record<string, string | undefined>): string {
@@ -66,6 +73,11 @@ export const paths = {
   signingRequest: {
     path: 'sign/:requestId',
     getHref: (requestId: string) => `/homeowner/sign/${encodeURIComponent(requestId)}`,
+  },
+  // One alarm event on the operator's queue: take it, call keyholders, close it.
+  monitoringEvent: {
+    path: 'events/:eventId',
+    getHref: (eventId: string) => `/operator/events/${encodeURIComponent(eventId)}`,
   },
   // The installer company's settings, for office staff: pack numbering and the sealing key.
   officeSettings: { path: 'settings', getHref: () => '/office/settings' },

@@ -80,8 +80,9 @@ describe('a keyholder on a phone', () => {
     expect(holdings.length).toBeGreaterThan(0);
     const body = page.locator('main');
     for (const holding of holdings) {
-      await expect.poll(() => body.textContent()).toContain(holding.name);
-      expect(await body.textContent()).toContain(holding.postcode);
+      // The postcode, not the name: an open alarm card also names the site.
+      await expect.poll(() => body.textContent()).toContain(holding.postcode);
+      expect(await body.textContent()).toContain(holding.name);
       if (holding.hazards) expect(await body.textContent()).toContain(holding.hazards);
     }
     const text = (await body.textContent()) ?? '';

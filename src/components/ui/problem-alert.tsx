@@ -6,6 +6,11 @@ import { cn } from '@/utils/cn';
 
 type ProblemAlertProps = {
   error: unknown;
+  /**
+   * What did not happen, in words ("The event was not taken."), in place of the API's own title;
+   * the API's reason then follows it.
+   */
+  title?: string;
   /** Field errors no field on the form could show. */
   leftoverFieldErrors?: readonly FieldError[];
   /** A sentence that helps with this particular failure, e.g. which file types are accepted. */
@@ -26,12 +31,17 @@ function describe(error: unknown): { title: string; detail?: string; reference?:
 /** Why a request failed, read out as soon as it appears, in words and with an icon. */
 export function ProblemAlert({
   error,
+  title: what,
   leftoverFieldErrors = [],
   hint,
   action,
   className,
 }: ProblemAlertProps) {
-  const { title, detail, reference } = describe(error);
+  const described = describe(error);
+  const title = what ?? described.title;
+  // Without the API's detail, its own title is the only reason there is: keep it under ours.
+  const detail = what ? (described.detail ?? described.title) : described.detail;
+  const { reference } = described;
   return (
     <div
       role="alert"

@@ -5,11 +5,15 @@ import { PageHeading } from '@/components/ui/page-heading';
 import { useRoleHome } from '@/features/homes/api/get-role-home';
 
 type KeyholderHomeProps = {
+  /** Alarms going on now, shown first; supplied by the route. */
+  alerts?: ReactNode;
   /** The sites this person holds keys for; supplied by the route. */
   children: ReactNode;
+  /** Earlier alarms, after everything else; supplied by the route. */
+  pastAlerts?: ReactNode;
 };
 
-export function KeyholderHome({ children }: KeyholderHomeProps) {
+export function KeyholderHome({ alerts, children, pastAlerts }: KeyholderHomeProps) {
   const { data: home } = useRoleHome('keyholder');
 
   return (
@@ -18,8 +22,10 @@ export function KeyholderHome({ children }: KeyholderHomeProps) {
         <p>Welcome, {home.displayName}.</p>
       </PageHeading>
       <div className="grid gap-6">
+        {alerts}
         <AlarmAttendanceSafetyCard prominent />
         {children}
+        {pastAlerts}
       </div>
     </>
   );

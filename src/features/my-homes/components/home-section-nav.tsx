@@ -9,11 +9,12 @@ const sections: ReadonlyArray<{ label: string; section?: MyHomeSection }> = [
   { label: 'Keyholders', section: 'keyholders' },
   { label: 'User codes', section: 'user-codes' },
   { label: 'Files', section: 'files' },
+  { label: 'Signal history', section: 'signals' },
   { label: 'Request a change', section: 'request' },
 ];
 
 /**
- * The pages of one home as a grid of large links, so all six fit a phone screen without
+ * The pages of one home as a grid of large links, so all seven fit a phone screen without
  * sideways scrolling; the current one is marked by aria-current and a brass bar, not colour alone.
  */
 export function HomeSectionNav({ siteId, homeName }: { siteId: string; homeName: string }) {

@@ -1,14 +1,19 @@
 import type { MyHome } from '@server/my/schema';
 
+import { FalseAlarmStanding, type FalseAlarmSummary } from '@/components/ui/false-alarm-standing';
 import { Notice, type NoticeTone } from '@/components/ui/notice';
 
-type PoliceResponseProps = { home: Pick<MyHome, 'urnStatus' | 'policeUrn' | 'monitoringCentre'> };
+type PoliceResponseProps = {
+  home: Pick<MyHome, 'urnStatus' | 'policeUrn' | 'monitoringCentre'>;
+  /** The false alarms counted against police response, where the page has them. */
+  falseAlarms?: FalseAlarmSummary;
+};
 
 /**
  * Police response in plain words. Under NPCC policy a monitored system with a police reference
  * (URN) can have confirmed alarms passed to the police; false alarms put that at risk.
  */
-export function PoliceResponse({ home }: PoliceResponseProps) {
+export function PoliceResponse({ home, falseAlarms }: PoliceResponseProps) {
   const urn = home.policeUrn ? ` (URN ${home.policeUrn})` : '';
   const states: Record<MyHome['urnStatus'], { tone: NoticeTone; title: string; text: string }> = {
     none: {
@@ -40,9 +45,16 @@ export function PoliceResponse({ home }: PoliceResponseProps) {
     },
   };
   const state = states[home.urnStatus];
-  return (
+  const notice = (
     <Notice tone={state.tone} title={state.title}>
       {state.text}
     </Notice>
+  );
+  if (!falseAlarms) return notice;
+  return (
+    <div className="grid gap-3">
+      {notice}
+      <FalseAlarmStanding falseAlarms={falseAlarms} audience="homeowner" />
+    </div>
   );
 }

@@ -6,6 +6,7 @@ import { Card } from '@/components/ui/card';
 import { getSiteQueryOptions, useSite } from '@/features/sites/api/get-site';
 import { EditSiteForm } from '@/features/sites/components/edit-site-form';
 import { EngineerAssignment } from '@/features/sites/components/engineer-assignment';
+import { SiteFalseAlarms } from '@/features/sites/components/site-false-alarms';
 import { SiteHomeowners } from '@/features/sites/components/site-homeowners';
 import { useSiteRole } from '@/features/sites/utils/use-site-role';
 import { formatDateTime } from '@/utils/format';
@@ -55,6 +56,7 @@ export function Component() {
             </Card>
           )}
           <SiteHomeowners site={site} canManage={role === 'office'} />
+          {site.monitoringCentre ? <SiteFalseAlarms siteId={site.id} /> : null}
         </aside>
       </div>
     </>
