@@ -37,6 +37,7 @@ import { createSignallingCredentialsRouter } from './monitoring/credentials/rout
 import { createTwilioWebhookRouter } from './monitoring/callout/webhooks';
 import { createKeyholderAlertsRouter } from './keyholder-alerts/routes';
 import { createSignalHistoryRouter } from './signal-history/routes';
+import { createServiceRouter } from './service/routes';
 
 export interface AppDeps {
   db: Knex;
@@ -146,6 +147,7 @@ export function createApp(deps: AppDeps): Express {
   app.use(createSignallingCredentialsRouter(deps));
   app.use(createKeyholderAlertsRouter(deps));
   app.use(createSignalHistoryRouter(deps));
+  app.use(createServiceRouter(deps));
   app.use('/api', apiNotFound);
 
   // --- The single-page app answers every other GET ---------------------------------------------

@@ -128,6 +128,19 @@ async function freshSlot(siteId: string) {
   return row!.id;
 }
 
+/** A call-out booked on the target's site, at version 1, for the office to move. */
+async function freshVisit(target: Target) {
+  const [row] = await db('service_visits')
+    .insert({
+      site_id: site(target).siteId,
+      kind: 'corrective',
+      due_date: new Date().toISOString().slice(0, 10),
+      reported_fault: 'Matrix fault.',
+    })
+    .returning<{ id: string }[]>('id');
+  return row!.id;
+}
+
 async function freshFile(siteId: string, uploadedBy: string) {
   const key = `sites/${siteId}/${crypto.randomUUID()}`;
   await harness.storage.put(key, PNG);
@@ -899,6 +912,37 @@ const MATRIX: Record<string, Entry> = {
     allowed: ['keyholder'],
     scoped: false,
     call: async () => ({ path: '/api/my/keyholdings' }),
+  },
+  'GET /api/sites/:siteId/service-plan': {
+    allowed: KEEPERS,
+    scoped: true,
+    call: async (target) => ({ path: `/api/sites/${site(target).siteId}/service-plan` }),
+  },
+  'POST /api/sites/:siteId/service/visits': {
+    allowed: ['office'],
+    scoped: true,
+    call: async (target) => ({
+      path: `/api/sites/${site(target).siteId}/service/visits`,
+      body: { kind: 'corrective', reportedFault: 'Matrix fault.' },
+    }),
+  },
+  'GET /api/service/visits': {
+    allowed: STAFF,
+    scoped: false,
+    call: async () => ({ path: '/api/service/visits' }),
+  },
+  'PATCH /api/service/visits/:visitId': {
+    allowed: ['office'],
+    scoped: true,
+    call: async (target) => ({
+      path: `/api/service/visits/${await freshVisit(target)}`,
+      body: { version: 1, dueDate: new Date().toISOString().slice(0, 10) },
+    }),
+  },
+  'GET /api/service/overdue': {
+    allowed: ['office'],
+    scoped: false,
+    call: async () => ({ path: '/api/service/overdue' }),
   },
 };
 

@@ -1,0 +1,94 @@
+import { Router, type Request } from 'express';
+import type { Knex } from 'knex';
+import { actorOf } from '../audit/actor';
+import { currentUser } from '../auth/current-user';
+import { SERVICE_PLAN_RULE, SERVICE_PLAN_SOURCE } from '../calc/service-plan';
+import { organisationIdsFor, requireRole } from '../http/guards';
+import { parseRequest } from '../http/validate';
+import { requireSiteRelation, siteAccessOf } from '../sites/access';
+import {
+  scheduleQuerySchema,
+  scheduleVisitInputSchema,
+  updateVisitInputSchema,
+  visitParamsSchema,
+} from './schema';
+import {
+  overdueSites,
+  schedule,
+  scheduleVisit,
+  servicePlanForSite,
+  ukDateOf,
+  updateVisit,
+} from './service';
+
+/**
+ * Service and maintenance: each site's plan (from its signalling), the office's schedule of
+ * visits, booking and moving them, and the sites whose preventive visit is overdue.
+ *
+ * Still to come (issue 7): the engineer's visit forms, the service report PDF, reminders and
+ * the homeowner's fault reports; the tables for them are already in place.
+ */
+export function createServiceRouter({ db }: { db: Knex }): Router {
+  const router = Router();
+  const installersOf = (req: Request) =>
+    organisationIdsFor(currentUser(req), ['engineer', 'office']);
+  const officesOf = (req: Request) => organisationIdsFor(currentUser(req), ['office']);
+  const today = () => ukDateOf(new Date());
+
+  // --- One site ------------------------------------------------------------------------------
+  router.get(
+    '/api/sites/:siteId/service-plan',
+    requireSiteRelation(db, 'engineer', 'office', 'homeowner'),
+    async function plan(req, res) {
+      res.json(await servicePlanForSite(db, siteAccessOf(req).id, today()));
+    },
+  );
+
+  router.post(
+    '/api/sites/:siteId/service/visits',
+    requireSiteRelation(db, 'office'),
+    async function book(req, res) {
+      const input = parseRequest(scheduleVisitInputSchema, req.body, 'body');
+      const { created, visit } = await scheduleVisit(
+        db,
+        siteAccessOf(req),
+        input,
+        actorOf(req),
+        new Date(),
+      );
+      res.status(created ? 201 : 200).json(visit);
+    },
+  );
+
+  // --- The company's schedule ------------------------------------------------------------------
+  router.get(
+    '/api/service/visits',
+    requireRole('engineer', 'office'),
+    async function visits(req, res) {
+      const query = parseRequest(scheduleQuerySchema, req.query, 'query');
+      res.json(await schedule(db, installersOf(req), query, today()));
+    },
+  );
+
+  router.patch(
+    '/api/service/visits/:visitId',
+    requireRole('office'),
+    async function move(req, res) {
+      const { visitId } = parseRequest(visitParamsSchema, req.params, 'params');
+      const input = parseRequest(updateVisitInputSchema, req.body, 'body');
+      res.json(await updateVisit(db, officesOf(req), visitId, input, actorOf(req), new Date()));
+    },
+  );
+
+  router.get('/api/service/overdue', requireRole('office'), async function overdue(req, res) {
+    const day = today();
+    res.json({
+      today: day,
+      rule: SERVICE_PLAN_RULE,
+      source: SERVICE_PLAN_SOURCE,
+      sites: await overdueSites(db, officesOf(req), day),
+    });
+  });
+
+  return router;
+}
