@@ -1,6 +1,12 @@
 import type { Knex } from 'knex';
 import { toRkm } from '../calc/notation';
 import {
+  addCalendarMonths,
+  intervalMonthsFor,
+  SERVICE_PLAN_RULE,
+  SERVICE_PLAN_SOURCE,
+} from '../calc/service-plan';
+import {
   latestSitingChecks,
   latestSystemTests,
   latestWalkTests,
@@ -69,11 +75,7 @@ function expectedFromResistors(zone: Zone): {
   }
 }
 
-function addMonths(date: Date, months: number): Date {
-  const next = new Date(date);
-  next.setUTCMonth(next.getUTCMonth() + months);
-  return next;
-}
+const londonDay = new Intl.DateTimeFormat('en-CA', { timeZone: 'Europe/London' });
 
 function testSummary(kind: string, details: Record<string, unknown>): string {
   switch (kind) {
@@ -281,12 +283,13 @@ export async function collectPackSnapshot(
       : null,
     servicePlan: {
       visitsPerYear,
-      nextVisitDue: addMonths(meta.issuedAt, 12 / visitsPerYear)
-        .toISOString()
-        .slice(0, 10),
-      basis: monitored
-        ? 'A monitored system has one remote and one on-site maintenance visit a year, six months apart.'
-        : 'An audible-only system has one on-site maintenance visit a year (common practice).',
+      // The same plan the service schedule keeps: calendar months from the day of issue in
+      // the UK, clamped to the month's end (31 August + 6 months is the end of February).
+      nextVisitDue: addCalendarMonths(
+        londonDay.format(meta.issuedAt),
+        intervalMonthsFor(visitsPerYear),
+      ),
+      basis: `${monitored ? 'Remotely monitored' : 'Audible-only'}: ${SERVICE_PLAN_RULE} (${SERVICE_PLAN_SOURCE}).`,
     },
     variations: meta.variations,
     engineer: meta.engineer,

@@ -34,6 +34,9 @@ export default async function setup(project: TestProject) {
   const stack = await startStack({
     database: project.getProvidedContext().database,
     clientDir,
+    // Every browser test signs in from 127.0.0.1; the sign-in limit per address and window is
+    // for people, and has its own test (tests/api/sign-in-flow.test.ts).
+    attemptsPerWindow: 1000,
   });
   project.provide('stack', {
     apiUrl: stack.apiUrl,

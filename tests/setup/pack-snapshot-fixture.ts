@@ -367,7 +367,7 @@ export function packSnapshotFixture(
       visitsPerYear: 2,
       nextVisitDue: '2027-06-02',
       basis:
-        'A monitored system has one remote and one on-site maintenance visit a year, six months apart.',
+        'Remotely monitored: 2 preventive visits a year for remotely monitored systems, 1 for audible-only (from memory of PD 6662 / BS 9263 practice).',
     },
     variations: [
       {
