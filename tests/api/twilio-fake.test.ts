@@ -1,5 +1,5 @@
 import { randomBytes } from 'node:crypto';
-import { createServer, type Server } from 'node:http';
+import { createServer, request as httpRequest, type Server } from 'node:http';
 import type { AddressInfo } from 'node:net';
 import express from 'express';
 import twilio from 'twilio';
@@ -490,6 +490,39 @@ describe('the page', () => {
     const reply = fake.inbox.list().find((m) => m.direction === 'inbound')!;
     expect(reply).toMatchObject({ from: KEYHOLDER, body: 'NO, away' });
     expect(received.some((r) => r.params.MessageSid === reply.sid)).toBe(true);
+  });
+
+  it('takes the form as a browser sends it from the page: same-origin, Origin null', async () => {
+    // The page sends no referrer, so Chromium posts its form with `Origin: null`; undici's
+    // fetch will not set Sec-Fetch-Site, so this request goes through node:http.
+    await sender().send({ to: KEYHOLDER, body: 'Can you attend?' });
+    const body = new URLSearchParams({
+      from: KEYHOLDER,
+      to: LOCAL_TWILIO_FROM,
+      body: '1',
+    }).toString();
+    const status = await new Promise<number>((resolve, reject) => {
+      const req = httpRequest(
+        `${fakeUrl}/replies`,
+        {
+          method: 'POST',
+          headers: {
+            'Content-Type': 'application/x-www-form-urlencoded',
+            'Content-Length': Buffer.byteLength(body),
+            Origin: 'null',
+            'Sec-Fetch-Site': 'same-origin',
+          },
+        },
+        (res) => {
+          res.resume();
+          resolve(res.statusCode ?? 0);
+        },
+      );
+      req.on('error', reject);
+      req.end(body);
+    });
+    expect(status).toBe(303);
+    expect(fake.inbox.list().find((m) => m.direction === 'inbound')).toMatchObject({ body: '1' });
   });
 
   it('a form on another website cannot make the page post a reply', async () => {

@@ -114,13 +114,14 @@ describe('an operator working an alarm', () => {
     const texts = page.getByRole('region', { name: 'Texts to keyholders' });
     await expect.poll(() => texts.innerText()).toContain(firstKeyholder.name);
 
-    // The keyholder answers "1" from their phone, through the Twilio fake's signed webhook.
-    const reply = await fetch(`${smsUrl}/api/replies`, {
-      method: 'POST',
-      headers: { 'Content-Type': 'application/json' },
-      body: JSON.stringify({ from: firstKeyholder.phone, body: '1' }),
-    });
-    expect(reply.status).toBe(201);
+    // The keyholder answers "1" on the local SMS page, as a person trying Wardbook would; the
+    // fake posts it to the app's webhook, signed as Twilio signs.
+    const phone = await page.context().newPage();
+    await phone.goto(smsUrl);
+    await phone.getByLabel(`Reply as ${firstKeyholder.phone}`).fill('1');
+    await phone.getByRole('button', { name: 'Send reply' }).click();
+    await phone.waitForURL(`${smsUrl}/#conversation-${firstKeyholder.phone.slice(1)}`);
+    await phone.close();
     await expect.poll(() => texts.innerText()).toContain('Attending');
     await expect.poll(() => mainText(page)).toContain(`${firstKeyholder.name} is attending`);
     const timeline = page.getByRole('log', { name: 'Timeline' });

@@ -378,8 +378,11 @@ export function createTwilioFake(options: TwilioFakeOptions): TwilioFake {
    * be able to make this browser do it: only this page's own origin may post.
    */
   const fromThisPage = (req: Request) => {
+    // Browsers say where a request comes from in Sec-Fetch-Site. The page sends no referrer,
+    // so a form post from it carries `Origin: null`: the Origin check is only for clients
+    // that do not send Sec-Fetch-Site.
     const site = req.get('sec-fetch-site');
-    if (site && site !== 'same-origin' && site !== 'none') return false;
+    if (site) return site === 'same-origin' || site === 'none';
     const origin = req.get('origin');
     return !origin || origin === `${req.protocol}://${req.get('host')}`;
   };
