@@ -33,6 +33,9 @@ export default defineConfig({
           globalSetup: ['tests/setup/global-database.ts'],
           testTimeout: 30_000,
           hookTimeout: 60_000,
+          // Texts, webhooks and jobs cross processes and queues: under a full run's load on two
+          // cores a second is not always enough for them to arrive.
+          expect: { poll: { timeout: 10_000 } },
         },
       },
       {

@@ -2,7 +2,7 @@ import { randomBytes } from 'node:crypto';
 import { createServer, type Server } from 'node:http';
 import type { AddressInfo } from 'node:net';
 import twilio from 'twilio';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { afterAll, afterEach, beforeAll, describe, expect, it } from 'vitest';
 import { LOCAL_TWILIO_ACCOUNT_SID, LOCAL_TWILIO_FROM } from '../../server/config/config';
 import { createTwilioFake, type TwilioFake } from '../../server/fakes/twilio/app';
 import { startCallOutEngine, type CallOutEngine } from '../../server/monitoring/callout/engine';
@@ -103,6 +103,14 @@ afterAll(async () => {
   await harness.close();
   await Promise.all([close(appServer), close(fakeServer)]);
   await closeTestDb();
+});
+
+// A test that fails part-way must not leave its event open: the next alarm would join it.
+afterEach(async () => {
+  await db('alarm_events')
+    .where({ site_id: world.own.siteId })
+    .whereNot({ status: 'closed' })
+    .update({ status: 'closed', closed_at: db.fn.now(), outcome: 'test_or_engineer' });
 });
 
 const asOperator = () => harness.signedInAs(world.operator.userId);
