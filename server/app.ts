@@ -38,6 +38,8 @@ import { createTwilioWebhookRouter } from './monitoring/callout/webhooks';
 import { createKeyholderAlertsRouter } from './keyholder-alerts/routes';
 import { createSignalHistoryRouter } from './signal-history/routes';
 import { createServiceRouter } from './service/routes';
+import { createFaultsRouter } from './faults/routes';
+import { createServiceHistoryRouter } from './service-history/routes';
 
 export interface AppDeps {
   db: Knex;
@@ -93,7 +95,11 @@ export function createApp(deps: AppDeps): Express {
   // --- Sessions, the signed-in user and CSRF ---------------------------------------------------
   // Drawn signatures are PNG images: their routes take bodies up to twice the image limit.
   app.use(
-    ['/api/sites/:siteId/handover/signatures', '/api/my/signing-requests/:requestId/sign'],
+    [
+      '/api/sites/:siteId/handover/signatures',
+      '/api/my/signing-requests/:requestId/sign',
+      '/api/service/visits/:visitId/complete',
+    ],
     express.json({ limit: '600kb' }),
   );
   app.use(express.json({ limit: '100kb' }));
@@ -148,6 +154,8 @@ export function createApp(deps: AppDeps): Express {
   app.use(createKeyholderAlertsRouter(deps));
   app.use(createSignalHistoryRouter(deps));
   app.use(createServiceRouter(deps));
+  app.use(createFaultsRouter(records));
+  app.use(createServiceHistoryRouter(deps));
   app.use('/api', apiNotFound);
 
   // --- The single-page app answers every other GET ---------------------------------------------

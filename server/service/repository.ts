@@ -124,6 +124,14 @@ export interface VisitRow {
   reported_fault: string | null;
   completed_at: Date | null;
   client_key: string | null;
+  completion_key: string | null;
+  checklist: Record<string, unknown>;
+  customer_name: string | null;
+  prime_cause: string | null;
+  action_taken: string | null;
+  parts_replaced: { part: string; quantity: number }[];
+  false_alarm: boolean | null;
+  false_alarm_cause: string | null;
   version: number;
 }
 
@@ -154,12 +162,36 @@ export const toServiceVisit = (row: VisitListRow): ServiceVisit => ({
   version: row.version,
 });
 
+/** Every column of a visit but the customer's drawn signature, which lists never need. */
+const VISIT_COLUMNS = [
+  'id',
+  'site_id',
+  'kind',
+  'status',
+  'due_date',
+  'scheduled_for',
+  'engineer_id',
+  'plan_visits_per_year',
+  'reported_fault',
+  'completed_at',
+  'client_key',
+  'completion_key',
+  'checklist',
+  'customer_name',
+  'prime_cause',
+  'action_taken',
+  'parts_replaced',
+  'false_alarm',
+  'false_alarm_cause',
+  'version',
+].map((column) => `v.${column}`);
+
 function visitsWithNames(db: Knex) {
   return db('service_visits as v')
     .join('sites as s', 's.id', 'v.site_id')
     .leftJoin('users as u', 'u.id', 'v.engineer_id')
     .select<VisitListRow[]>(
-      'v.*',
+      ...VISIT_COLUMNS,
       's.installer_id',
       's.reference as site_reference',
       's.name as site_name',

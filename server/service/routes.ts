@@ -4,15 +4,20 @@ import { actorOf } from '../audit/actor';
 import { currentUser } from '../auth/current-user';
 import { SERVICE_PLAN_RULE, SERVICE_PLAN_SOURCE } from '../calc/service-plan';
 import { organisationIdsFor, requireRole } from '../http/guards';
+import { refuseUserCodes } from '../http/refuse-user-codes';
 import { parseRequest } from '../http/validate';
-import { requireSiteRelation, siteAccessOf } from '../sites/access';
+import { requireSiteRelation, siteAccessOf, STAFF_WRITERS } from '../sites/access';
+import { completeVisit } from './completion';
 import {
+  bookCalloutInputSchema,
+  completeVisitInputSchema,
   scheduleQuerySchema,
   scheduleVisitInputSchema,
   updateVisitInputSchema,
   visitParamsSchema,
 } from './schema';
 import {
+  bookCallout,
   overdueSites,
   schedule,
   scheduleVisit,
@@ -23,16 +28,18 @@ import {
 
 /**
  * Service and maintenance: each site's plan (from its signalling), the office's schedule of
- * visits, booking and moving them, and the sites whose preventive visit is overdue.
+ * visits, booking and moving them, call-outs, the engineer completing a visit, and the sites
+ * whose preventive visit is overdue. Homeowners' fault reports are in server/faults, their
+ * service history in server/service-history.
  *
- * Still to come (issue 7): the engineer's visit forms, the service report PDF, reminders and
- * the homeowner's fault reports; the tables for them are already in place.
+ * Still to come (issue 7): the service report PDF and reminders.
  */
 export function createServiceRouter({ db }: { db: Knex }): Router {
   const router = Router();
   const installersOf = (req: Request) =>
     organisationIdsFor(currentUser(req), ['engineer', 'office']);
   const officesOf = (req: Request) => organisationIdsFor(currentUser(req), ['office']);
+  const engineersOf = (req: Request) => organisationIdsFor(currentUser(req), ['engineer']);
   const today = () => ukDateOf(new Date());
 
   // --- One site ------------------------------------------------------------------------------
@@ -60,6 +67,23 @@ export function createServiceRouter({ db }: { db: Knex }): Router {
     },
   );
 
+  // A corrective visit, from a homeowner's fault report or a phone call.
+  router.post(
+    '/api/sites/:siteId/service/callouts',
+    requireSiteRelation(db, ...STAFF_WRITERS),
+    async function bookCalloutVisit(req, res) {
+      const input = parseRequest(bookCalloutInputSchema, req.body, 'body');
+      const { created, visit } = await bookCallout(
+        db,
+        siteAccessOf(req),
+        input,
+        actorOf(req),
+        new Date(),
+      );
+      res.status(created ? 201 : 200).json(visit);
+    },
+  );
+
   // --- The company's schedule ------------------------------------------------------------------
   router.get(
     '/api/service/visits',
@@ -77,6 +101,19 @@ export function createServiceRouter({ db }: { db: Knex }): Router {
       const { visitId } = parseRequest(visitParamsSchema, req.params, 'params');
       const input = parseRequest(updateVisitInputSchema, req.body, 'body');
       res.json(await updateVisit(db, officesOf(req), visitId, input, actorOf(req), new Date()));
+    },
+  );
+
+  // The engineer's form from site, often sent from a phone on a poor signal: a resend with the
+  // same key answers with the visit it completed.
+  router.post(
+    '/api/service/visits/:visitId/complete',
+    requireRole('engineer'),
+    refuseUserCodes,
+    async function complete(req, res) {
+      const { visitId } = parseRequest(visitParamsSchema, req.params, 'params');
+      const input = parseRequest(completeVisitInputSchema, req.body, 'body');
+      res.json(await completeVisit(db, engineersOf(req), visitId, input, actorOf(req), new Date()));
     },
   );
 

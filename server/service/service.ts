@@ -21,6 +21,7 @@ import {
   MAX_BOOKING_YEARS_AHEAD,
   MAX_SCHEDULE_DAYS,
   VISIT_KIND_LABELS,
+  type bookCalloutInputSchema,
   type scheduleQuerySchema,
   type scheduleVisitInputSchema,
   type ServicePlanView,
@@ -222,6 +223,8 @@ export async function scheduleVisit(
   input: z.output<typeof scheduleVisitInputSchema>,
   actor: Actor,
   now: Date,
+  /** More to write in the booking's transaction (a call-out marks its fault report booked). */
+  alsoInTransaction?: (trx: Knex.Transaction, visitId: string) => Promise<void>,
 ): Promise<{ created: boolean; visit: ReturnType<typeof toServiceVisit> }> {
   if (input.clientKey) {
     const previous = await findVisitByClientKey(db, access.id, input.clientKey);
@@ -263,6 +266,7 @@ export async function scheduleVisit(
           planVisitsPerYear: row!.plan_visits_per_year,
         },
       });
+      await alsoInTransaction?.(trx, row!.id);
       return row!.id;
     });
   } catch (error) {
@@ -366,4 +370,89 @@ export async function updateVisit(
     explainBookingConflict(error);
   }
   return toServiceVisit((await findVisit(db, visitId))!);
+}
+
+// --- Call-outs ----------------------------------------------------------------------------------
+
+interface FaultReportRow {
+  id: string;
+  site_id: string;
+  description: string;
+  status: 'open' | 'scheduled' | 'closed';
+  visit_id: string | null;
+}
+
+/**
+ * Books a corrective visit, from a homeowner's fault report or from a phone call. A fault report
+ * is marked booked in the same transaction, so it is never left open with a visit booked for it,
+ * nor booked twice.
+ */
+export async function bookCallout(
+  db: Knex,
+  access: SiteAccess,
+  input: z.output<typeof bookCalloutInputSchema>,
+  actor: Actor,
+  now: Date,
+) {
+  let report: FaultReportRow | undefined;
+  if (input.faultReportId) {
+    report = await db<FaultReportRow>('fault_reports')
+      .where({ id: input.faultReportId, site_id: access.id })
+      .first();
+    if (!report)
+      throw new ValidationError([
+        { path: 'body.faultReportId', message: 'That fault report is not on this site.' },
+      ]);
+  }
+  const { created, visit } = await scheduleVisit(
+    db,
+    access,
+    {
+      kind: 'corrective',
+      dueDate: input.dueDate,
+      scheduledFor: input.scheduledFor,
+      engineerId: input.engineerId,
+      reportedFault: input.reportedFault ?? report?.description,
+      clientKey: input.clientKey,
+    },
+    actor,
+    now,
+    report &&
+      (async (trx, visitId) => {
+        const current = await trx<FaultReportRow>('fault_reports')
+          .where({ id: report.id })
+          .forUpdate()
+          .first();
+        if (current?.status === 'scheduled')
+          throw new ConflictError(
+            'A call-out is already booked for this fault report: move that visit instead.',
+          );
+        if (current?.status !== 'open')
+          throw new ConflictError(
+            'This fault report is closed: book a call-out without it, saying what was reported.',
+          );
+        await trx('fault_reports')
+          .where({ id: report.id })
+          .update({
+            status: 'scheduled',
+            visit_id: visitId,
+            version: trx.raw('version + 1'),
+            updated_at: trx.fn.now(),
+          });
+        await recordAuditEntry(trx, {
+          ...actor,
+          action: 'fault_report.booked',
+          entityType: 'fault_report',
+          entityId: report.id,
+          organisationId: access.installerId,
+          summary: 'Call-out booked for a reported fault',
+          changes: { status: { from: 'open', to: 'scheduled' }, visitId: { to: visitId } },
+        });
+      }),
+  );
+  const linked = await db('fault_reports').where({ visit_id: visit.id }).first('id');
+  return {
+    created,
+    visit: { ...visit, faultReportId: (linked?.id as string | undefined) ?? null },
+  };
 }

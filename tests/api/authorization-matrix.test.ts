@@ -944,6 +944,47 @@ const MATRIX: Record<string, Entry> = {
     scoped: false,
     call: async () => ({ path: '/api/service/overdue' }),
   },
+  'POST /api/sites/:siteId/service/callouts': {
+    allowed: STAFF,
+    scoped: true,
+    call: async (target) => ({
+      path: `/api/sites/${site(target).siteId}/service/callouts`,
+      body: { reportedFault: 'Matrix call-out by phone.' },
+    }),
+  },
+  'POST /api/service/visits/:visitId/complete': {
+    allowed: ['engineer'],
+    scoped: true,
+    call: async (target) => ({
+      path: `/api/service/visits/${await freshVisit(target)}/complete`,
+      body: {
+        kind: 'corrective',
+        clientKey: crypto.randomUUID(),
+        completedAt: new Date(Date.now() - 60_000).toISOString(),
+        primeCause: 'equipment_fault',
+        actionTaken: 'Matrix repair.',
+        falseAlarm: false,
+      },
+    }),
+  },
+  'POST /api/my/homes/:siteId/faults': {
+    allowed: ['homeowner'],
+    scoped: true,
+    call: async (target) => ({
+      path: `/api/my/homes/${site(target).siteId}/faults`,
+      body: { description: 'Matrix fault report.' },
+    }),
+  },
+  'GET /api/service/faults': {
+    allowed: ['office'],
+    scoped: false,
+    call: async () => ({ path: '/api/service/faults' }),
+  },
+  'GET /api/my/homes/:siteId/service-history': {
+    allowed: ['homeowner'],
+    scoped: true,
+    call: async (target) => ({ path: `/api/my/homes/${site(target).siteId}/service-history` }),
+  },
 };
 
 // Sign-in routes and the client's pages are outside the API; they have their own tests.
