@@ -114,6 +114,10 @@ function staffRoutes(queryClient: QueryClient): RouteObject[] {
       path: paths.calculators.path,
       lazy: screen(queryClient, () => import('@/app/routes/app/calculators')),
     },
+    {
+      path: paths.service.path,
+      lazy: screen(queryClient, () => import('@/app/routes/app/service-schedule')),
+    },
   ];
 }
 

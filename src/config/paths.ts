@@ -61,6 +61,13 @@ export const paths = {
     path: 'calculators',
     getHref: (role: SiteRole) => `/${role}/calculators`,
   },
+  // The company's service visits: the office books and moves them, engineers see their own.
+  // `book` opens the booking form for that site; `visit` opens one visit's details.
+  service: {
+    path: 'service',
+    getHref: (role: SiteRole, query: { book?: string; visit?: string; month?: string } = {}) =>
+      withQuery(`/${role}/service`, query),
+  },
   // A homeowner's own site, phone-first.
   myHome: {
     path: 'homes/:siteId',

@@ -1,5 +1,5 @@
 import { Suspense } from 'react';
-import { Building2, Calculator, House, Settings } from 'lucide-react';
+import { Building2, Calculator, CalendarDays, House, Settings } from 'lucide-react';
 import { Outlet } from 'react-router-dom';
 
 import type { NavigationItem } from '@/components/layouts/navigation';
@@ -40,6 +40,11 @@ export function WorkspaceLayoutRoute() {
       href: paths.sites.list.getHref(current.role),
       icon: Building2,
       exact: false,
+    });
+    navigation.push({
+      label: 'Service schedule',
+      href: paths.service.getHref(current.role),
+      icon: CalendarDays,
     });
     navigation.push({
       label: 'Calculators',

@@ -1,8 +1,11 @@
 import type { QueryClient } from '@tanstack/react-query';
-import { useParams, type LoaderFunctionArgs } from 'react-router-dom';
+import { Link, useParams, type LoaderFunctionArgs } from 'react-router-dom';
 import { UserCog } from 'lucide-react';
 
 import { Card } from '@/components/ui/card';
+import { buttonClassName } from '@/components/ui/button-styles';
+import { paths } from '@/config/paths';
+import { ServicePlanCard } from '@/features/service/components/service-plan-card';
 import { getSiteQueryOptions, useSite } from '@/features/sites/api/get-site';
 import { EditSiteForm } from '@/features/sites/components/edit-site-form';
 import { EngineerAssignment } from '@/features/sites/components/engineer-assignment';
@@ -55,6 +58,18 @@ export function Component() {
               )}
             </Card>
           )}
+          <ServicePlanCard
+            siteId={site.id}
+            audience="staff"
+            actions={
+              <Link
+                to={paths.service.getHref(role, role === 'office' ? { book: site.id } : {})}
+                className={buttonClassName({ variant: 'secondary' })}
+              >
+                {role === 'office' ? 'Book a visit' : 'Service schedule'}
+              </Link>
+            }
+          />
           <SiteHomeowners site={site} canManage={role === 'office'} />
           {site.monitoringCentre ? <SiteFalseAlarms siteId={site.id} /> : null}
         </aside>
