@@ -40,6 +40,7 @@ import { createSignalHistoryRouter } from './signal-history/routes';
 import { createServiceRouter } from './service/routes';
 import { createFaultsRouter } from './faults/routes';
 import { createServiceHistoryRouter } from './service-history/routes';
+import { createServiceReportRouter } from './service-report/routes';
 
 export interface AppDeps {
   db: Knex;
@@ -59,6 +60,8 @@ export interface AppDeps {
   sealKeySecret: string;
   /** Builds handover packs off the request path; without it a build runs within the request. */
   buildQueue?: PackBuildQueue;
+  /** Draws service reports off the request path; without it a report is drawn in the request. */
+  serviceReportQueue?: PackBuildQueue;
   /** Checks the signatures on Twilio's webhooks; without it every webhook is refused. */
   twilioAuthToken?: string;
   /** Sends queued keyholder texts now (server/monitoring/callout/engine.ts). */
@@ -154,6 +157,7 @@ export function createApp(deps: AppDeps): Express {
   app.use(createKeyholderAlertsRouter(deps));
   app.use(createSignalHistoryRouter(deps));
   app.use(createServiceRouter(deps));
+  app.use(createServiceReportRouter(deps));
   app.use(createFaultsRouter(records));
   app.use(createServiceHistoryRouter(deps));
   app.use('/api', apiNotFound);

@@ -12,6 +12,7 @@ import { createLocalDiskStorage } from './files/storage';
 import { createSmtpMailer } from './mail/mailer';
 import { startPackBuildQueue } from './handover/build-queue';
 import { ensureSealKeys, runPackBuild } from './handover/service';
+import { resumeQueuedServiceReports, runServiceReport } from './service-report/service';
 import { startCallOutEngine } from './monitoring/callout/engine';
 import { createSmsSender } from './sms/sender';
 import { OIDC_CLIENT_ID } from '../idp/clients';
@@ -43,6 +44,14 @@ const buildQueue = await startPackBuildQueue({
   logger,
   run: (buildId) => runPackBuild(handoverDeps, buildId),
 });
+// Service reports use the same durable job queue (a queue of their own) and the same renderer.
+const serviceReportQueue = await startPackBuildQueue({
+  connection: config.postgres,
+  logger,
+  queueName: 'service-report',
+  run: (reportId) => runServiceReport(handoverDeps, reportId),
+});
+await resumeQueuedServiceReports(db, serviceReportQueue);
 
 // Keyholder texts go out through the twilio SDK (to the local fake unless configured otherwise).
 const callOut = await startCallOutEngine({
@@ -75,6 +84,7 @@ const app = createApp({
   idpIssuer: config.idp.issuer,
   sealKeySecret: secrets.sealKeySecret,
   buildQueue,
+  serviceReportQueue,
   twilioAuthToken: secrets.twilioAuthToken,
   callOut,
 });
@@ -93,6 +103,7 @@ async function shutdown(signal: string) {
   server.close();
   server.closeIdleConnections();
   await buildQueue.stop().catch(() => undefined);
+  await serviceReportQueue.stop().catch(() => undefined);
   await callOut.stop().catch(() => undefined);
   mailer.close();
   await Promise.allSettled([db.destroy(), sessionPool.end()]);

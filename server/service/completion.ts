@@ -10,6 +10,7 @@ import { BATTERY_MIN_LOADED_VOLTS, BATTERY_MIN_RESTING_VOLTS } from '../commissi
 import { walkTestFailures } from '../commissioning/service';
 import { siteEngineering, type SiteEngineering } from '../engineering/site-engineering';
 import { ConflictError, NotFoundError, ValidationError, type FieldError } from '../http/errors';
+import { queueServiceReport } from '../service-report/repository';
 import { findSystemRow } from '../systems/repository';
 import { findVisit, toServiceVisit, type VisitListRow } from './repository';
 import {
@@ -467,6 +468,8 @@ export async function completeVisit(
           updated_at: trx.fn.now(),
         });
     }
+    // Queued with the completion itself, so no completed visit is ever left without its report.
+    await queueServiceReport(trx, { visitId, siteId: visit.site_id });
     await recordAuditEntry(trx, {
       ...actor,
       action: 'service_visit.completed',

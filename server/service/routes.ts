@@ -1,11 +1,16 @@
 import { Router, type Request } from 'express';
 import type { Knex } from 'knex';
+import type { Logger } from 'pino';
 import { actorOf } from '../audit/actor';
 import { currentUser } from '../auth/current-user';
 import { SERVICE_PLAN_RULE, SERVICE_PLAN_SOURCE } from '../calc/service-plan';
+import type { FileStorage } from '../files/storage';
+import type { PackBuildQueue } from '../handover/build-queue';
 import { organisationIdsFor, requireRole } from '../http/guards';
 import { refuseUserCodes } from '../http/refuse-user-codes';
 import { parseRequest } from '../http/validate';
+import type { Mailer } from '../mail/mailer';
+import { requestServiceReport } from '../service-report/service';
 import { requireSiteRelation, siteAccessOf, STAFF_WRITERS } from '../sites/access';
 import { completeVisit } from './completion';
 import {
@@ -30,11 +35,19 @@ import {
  * Service and maintenance: each site's plan (from its signalling), the office's schedule of
  * visits, booking and moving them, call-outs, the engineer completing a visit, and the sites
  * whose preventive visit is overdue. Homeowners' fault reports are in server/faults, their
- * service history in server/service-history.
+ * service history in server/service-history, a completed visit's report in server/service-report.
  *
- * Still to come (issue 7): the service report PDF and reminders.
+ * Still to come (issue 7): reminders.
  */
-export function createServiceRouter({ db }: { db: Knex }): Router {
+export function createServiceRouter(deps: {
+  db: Knex;
+  storage: FileStorage;
+  mailer: Mailer;
+  logger: Logger;
+  serviceReportQueue?: PackBuildQueue;
+}): Router {
+  const { db } = deps;
+  const reportDeps = { ...deps, reportQueue: deps.serviceReportQueue };
   const router = Router();
   const installersOf = (req: Request) =>
     organisationIdsFor(currentUser(req), ['engineer', 'office']);
@@ -113,7 +126,17 @@ export function createServiceRouter({ db }: { db: Knex }): Router {
     async function complete(req, res) {
       const { visitId } = parseRequest(visitParamsSchema, req.params, 'params');
       const input = parseRequest(completeVisitInputSchema, req.body, 'body');
-      res.json(await completeVisit(db, engineersOf(req), visitId, input, actorOf(req), new Date()));
+      const visit = await completeVisit(
+        db,
+        engineersOf(req),
+        visitId,
+        input,
+        actorOf(req),
+        new Date(),
+      );
+      // The report is drawn and e-mailed by a job: the engineer's phone is answered at once.
+      await requestServiceReport(reportDeps, visitId);
+      res.json(visit);
     },
   );
 

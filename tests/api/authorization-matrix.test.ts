@@ -141,6 +141,30 @@ async function freshVisit(target: Target) {
   return row!.id;
 }
 
+/** A completed visit on the target's site whose report has been drawn and stored. */
+async function visitWithReport(target: Target) {
+  const [visit] = await db('service_visits')
+    .insert({
+      site_id: site(target).siteId,
+      kind: 'corrective',
+      status: 'done',
+      completed_at: new Date(Date.now() - 60_000),
+      due_date: new Date().toISOString().slice(0, 10),
+      reported_fault: 'Matrix fault.',
+    })
+    .returning<{ id: string }[]>('id');
+  const key = `service-reports/${site(target).siteId}/${crypto.randomUUID()}`;
+  await harness.storage.put(key, Buffer.from('%PDF-1.7 matrix'));
+  await db('service_reports').insert({
+    visit_id: visit!.id,
+    site_id: site(target).siteId,
+    status: 'done',
+    pdf_key: key,
+    size_bytes: 15,
+  });
+  return visit!.id;
+}
+
 async function freshFile(siteId: string, uploadedBy: string) {
   const key = `sites/${siteId}/${crypto.randomUUID()}`;
   await harness.storage.put(key, PNG);
@@ -984,6 +1008,13 @@ const MATRIX: Record<string, Entry> = {
     allowed: ['homeowner'],
     scoped: true,
     call: async (target) => ({ path: `/api/my/homes/${site(target).siteId}/service-history` }),
+  },
+  'GET /api/service/visits/:visitId/report.pdf': {
+    allowed: KEEPERS,
+    scoped: true,
+    call: async (target) => ({
+      path: `/api/service/visits/${await visitWithReport(target)}/report.pdf`,
+    }),
   },
 };
 

@@ -16,9 +16,10 @@ import { createSessionStore, SESSION_COOKIE } from '../../server/auth/session';
 import { createLogger } from '../../server/http/logger';
 import { createSmtpServer, Mailbox } from '../../server/fakes/smtp/mailbox';
 import { createLocalDiskStorage, type FileStorage } from '../../server/files/storage';
-import { createSmtpMailer } from '../../server/mail/mailer';
+import { createSmtpMailer, type Mailer } from '../../server/mail/mailer';
 import { startPackBuildQueue } from '../../server/handover/build-queue';
 import { runPackBuild } from '../../server/handover/service';
+import { runServiceReport } from '../../server/service-report/service';
 import './provided';
 
 export interface ApiHarness {
@@ -26,6 +27,8 @@ export interface ApiHarness {
   store: Store;
   /** Everything the API e-mailed during the test file. */
   mailbox: Mailbox;
+  /** The app's own mailer, delivering into `mailbox` (for jobs a test runs by hand). */
+  mailer: Mailer;
   storage: FileStorage;
   /** A supertest agent already signed in as the user, with its CSRF token. */
   signedInAs(userId: string): Promise<{ agent: request.Agent; csrfToken: string; cookie: string }>;
@@ -69,6 +72,12 @@ export async function buildApiHarness(
     run: (buildId) =>
       runPackBuild({ db, storage, mailer, logger, publicUrl, sealKeySecret }, buildId),
   });
+  const serviceReportQueue = await startPackBuildQueue({
+    connection: inject('database'),
+    logger,
+    queueName: `service-report-${randomBytes(6).toString('hex')}`,
+    run: (reportId) => runServiceReport({ db, storage, mailer, logger }, reportId),
+  });
   const app = createApp({
     db,
     logger,
@@ -86,6 +95,7 @@ export async function buildApiHarness(
     idpIssuer: 'http://127.0.0.1:3001',
     sealKeySecret,
     buildQueue,
+    serviceReportQueue,
     twilioAuthToken: options.twilioAuthToken,
     callOut: options.callOut,
   });
@@ -94,6 +104,7 @@ export async function buildApiHarness(
     app,
     store,
     mailbox,
+    mailer,
     storage,
     async signedInAs(userId) {
       const sid = randomBytes(24).toString('base64url');
@@ -121,6 +132,7 @@ export async function buildApiHarness(
     },
     async close() {
       await buildQueue.stop();
+      await serviceReportQueue.stop();
       mailer.close();
       await new Promise((resolve) => smtp.close(() => resolve(undefined)));
       await rm(filesDir, { recursive: true, force: true });

@@ -1,4 +1,5 @@
 import { Worker } from 'node:worker_threads';
+import type { ServiceReportSnapshot } from '../../service-report/schema';
 import type { PackSnapshot } from '../snapshot';
 
 type Pending = { resolve: (pdf: Buffer) => void; reject: (error: Error) => void };
@@ -36,13 +37,24 @@ function renderThread(): Worker {
  * Requests queue there one at a time.
  */
 export function renderPackPdfOffThread(snapshot: PackSnapshot): Promise<Buffer> {
+  return renderOffThread({ snapshot });
+}
+
+/** Draws a service report on the same thread, queued behind any pack being drawn. */
+export function renderServiceReportPdfOffThread(serviceReport: ServiceReportSnapshot) {
+  return renderOffThread({ serviceReport });
+}
+
+function renderOffThread(
+  request: { snapshot: PackSnapshot } | { serviceReport: ServiceReportSnapshot },
+): Promise<Buffer> {
   const id = nextId++;
   return new Promise<Buffer>((resolve, reject) => {
     pending.set(id, { resolve, reject });
     const thread = renderThread();
     // Held while it works, so a waiting render keeps the process alive; let go when idle.
     thread.ref();
-    thread.postMessage({ id, snapshot });
+    thread.postMessage({ id, ...request });
   });
 }
 
