@@ -121,6 +121,17 @@ function staffRoutes(queryClient: QueryClient): RouteObject[] {
   ];
 }
 
+// Engineers also finish their visits on site, on a phone.
+function engineerRoutes(queryClient: QueryClient): RouteObject[] {
+  return [
+    ...staffRoutes(queryClient),
+    {
+      path: paths.completeVisit.path,
+      lazy: screen(queryClient, () => import('@/app/routes/app/service-visit-complete')),
+    },
+  ];
+}
+
 // Office staff also keep the company's settings: pack numbering and the sealing key.
 function officeRoutes(queryClient: QueryClient): RouteObject[] {
   return [
@@ -164,6 +175,10 @@ function myHomeRoutes(queryClient: QueryClient): RouteObject[] {
           lazy: screen(queryClient, () => import('@/app/routes/app/homes/my-home-signals')),
         },
         {
+          path: 'service',
+          lazy: screen(queryClient, () => import('@/app/routes/app/homes/my-home-service')),
+        },
+        {
           path: 'request',
           lazy: screen(queryClient, () => import('@/app/routes/app/homes/my-home-request')),
         },
@@ -199,7 +214,7 @@ function operatorRoutes(queryClient: QueryClient): RouteObject[] {
 }
 
 const roleSubRoutes: Partial<Record<Role, (queryClient: QueryClient) => RouteObject[]>> = {
-  engineer: staffRoutes,
+  engineer: engineerRoutes,
   office: officeRoutes,
   operator: operatorRoutes,
   homeowner: homeownerRoutes,

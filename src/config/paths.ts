@@ -18,6 +18,7 @@ export const MY_HOME_SECTIONS = [
   'user-codes',
   'files',
   'signals',
+  'service',
   'request',
 ] as const;
 export type MyHomeSection = (typeof MY_HOME_SECTIONS)[number];
@@ -67,6 +68,13 @@ export const paths = {
     path: 'service',
     getHref: (role: SiteRole, query: { book?: string; visit?: string; month?: string } = {}) =>
       withQuery(`/${role}/service`, query),
+  },
+  // The engineer's form for finishing one visit on site; `day` is the day the schedule shows
+  // it on, so the visit is found in that stretch of the schedule.
+  completeVisit: {
+    path: 'service/visits/:visitId/complete',
+    getHref: (visitId: string, day: string) =>
+      withQuery(`/engineer/service/visits/${encodeURIComponent(visitId)}/complete`, { day }),
   },
   // A homeowner's own site, phone-first.
   myHome: {

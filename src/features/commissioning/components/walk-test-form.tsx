@@ -7,7 +7,7 @@ import { STATE_NAMES } from '@server/calc/loop';
 import type { Zone } from '@server/zones/schema';
 import { Notice } from '@/components/ui/notice';
 import { ProblemAlert } from '@/components/ui/problem-alert';
-import { LiveReading } from '@/features/commissioning/components/live-reading';
+import { LiveReading } from '@/components/ui/live-reading';
 import { KeptOnPhoneOutcome } from '@/features/commissioning/components/record-outcome';
 import {
   TouchCheckbox,

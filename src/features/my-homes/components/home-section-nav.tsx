@@ -10,11 +10,12 @@ const sections: ReadonlyArray<{ label: string; section?: MyHomeSection }> = [
   { label: 'User codes', section: 'user-codes' },
   { label: 'Files', section: 'files' },
   { label: 'Signal history', section: 'signals' },
+  { label: 'Service history', section: 'service' },
   { label: 'Request a change', section: 'request' },
 ];
 
 /**
- * The pages of one home as a grid of large links, so all seven fit a phone screen without
+ * The pages of one home as a grid of large links, so all of them fit a phone screen without
  * sideways scrolling; the current one is marked by aria-current and a brass bar, not colour alone.
  */
 export function HomeSectionNav({ siteId, homeName }: { siteId: string; homeName: string }) {

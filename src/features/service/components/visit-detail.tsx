@@ -17,6 +17,7 @@ import {
   describeBooking,
   inlineLinkClassName,
   kindLabel,
+  visitDay,
 } from '@/features/service/utils/visit-words';
 
 type VisitDetailProps = {
@@ -109,6 +110,16 @@ export function VisitDetail({
             </Link>{' '}
             for its address, access notes and hazards.
           </p>
+          {role === 'engineer' && visit.status === 'scheduled' ? (
+            <p>
+              <Link
+                to={paths.completeVisit.getHref(visit.id, visitDay(visit))}
+                className={buttonClassName({ variant: 'primary', size: 'lg' })}
+              >
+                Complete this visit
+              </Link>
+            </p>
+          ) : null}
           {role === 'office' ? (
             <OfficeActions
               visit={visit}
