@@ -15,6 +15,9 @@ import { ensureSealKeys, runPackBuild } from './handover/service';
 import { resumeQueuedServiceReports, runServiceReport } from './service-report/service';
 import { startCallOutEngine } from './monitoring/callout/engine';
 import { createSmsSender } from './sms/sender';
+import { startServiceReminderJobs } from './service-reminders/jobs';
+import { sendServiceReminders } from './service-reminders/sweep';
+import { ukDateOf } from './service/service';
 import { OIDC_CLIENT_ID } from '../idp/clients';
 
 // The API process: configuration, dependencies, listen, and a clean stop on SIGINT/SIGTERM.
@@ -54,17 +57,25 @@ const serviceReportQueue = await startPackBuildQueue({
 await resumeQueuedServiceReports(db, serviceReportQueue);
 
 // Keyholder texts go out through the twilio SDK (to the local fake unless configured otherwise).
+const sms = createSmsSender({
+  accountSid: config.twilio.accountSid,
+  authToken: secrets.twilioAuthToken,
+  from: config.twilio.from,
+  apiBaseUrl: config.twilio.apiBaseUrl,
+});
 const callOut = await startCallOutEngine({
   db,
   logger,
-  sms: createSmsSender({
-    accountSid: config.twilio.accountSid,
-    authToken: secrets.twilioAuthToken,
-    from: config.twilio.from,
-    apiBaseUrl: config.twilio.apiBaseUrl,
-  }),
+  sms,
   statusCallbackUrl: `${config.api.publicUrl}/api/webhooks/twilio/status`,
   connection: config.postgres,
+});
+
+// Homeowners hear before a visit is due and offices when one is overdue: an hourly durable job.
+const reminders = await startServiceReminderJobs({
+  connection: config.postgres,
+  logger,
+  run: () => sendServiceReminders({ db, mailer, sms, logger }, ukDateOf(new Date())),
 });
 
 const app = createApp({
@@ -105,6 +116,7 @@ async function shutdown(signal: string) {
   await buildQueue.stop().catch(() => undefined);
   await serviceReportQueue.stop().catch(() => undefined);
   await callOut.stop().catch(() => undefined);
+  await reminders.stop().catch(() => undefined);
   mailer.close();
   await Promise.allSettled([db.destroy(), sessionPool.end()]);
   process.exit(0);

@@ -51,7 +51,7 @@ function bookedVisitOf(row: PlanFactsRow) {
     : null;
 }
 
-function planOf(row: PlanFactsRow, today: string): ServicePlanView {
+export function planOf(row: PlanFactsRow, today: string): ServicePlanView {
   const inService = row.handed_over_on
     ? { on: row.handed_over_on, visitsPerYear: row.plan_at_handover }
     : row.commissioned_on
