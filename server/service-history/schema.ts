@@ -14,6 +14,8 @@ const visitEntrySchema = z.object({
   passed: z.boolean().nullable(),
   findings: z.array(z.string()),
   engineerName: z.string().nullable(),
+  /** The visit's service report, once it has been drawn. */
+  reportUrl: z.string().nullable(),
 });
 
 const faultEntrySchema = z.object({

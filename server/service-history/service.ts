@@ -15,6 +15,9 @@ export async function serviceHistory(db: Knex, siteId: string): Promise<ServiceH
   const [visits, faults, packs] = await Promise.all([
     db('service_visits as v')
       .leftJoin('users as u', 'u.id', 'v.engineer_id')
+      .leftJoin('service_reports as sr', function reportOfVisit() {
+        this.on('sr.visit_id', '=', 'v.id').andOnVal('sr.status', '=', 'done');
+      })
       .where({ 'v.site_id': siteId, 'v.status': 'done' })
       .orderBy('v.completed_at', 'desc')
       .limit(MOST_OF_EACH)
@@ -25,6 +28,7 @@ export async function serviceHistory(db: Knex, siteId: string): Promise<ServiceH
           completed_at: Date;
           outcome: VisitOutcome | null;
           engineer_name: string | null;
+          report_id: string | null;
         }[]
       >(
         'v.id',
@@ -32,6 +36,7 @@ export async function serviceHistory(db: Knex, siteId: string): Promise<ServiceH
         'v.completed_at',
         db.raw(`v.checklist -> 'outcome' as outcome`),
         'u.display_name as engineer_name',
+        'sr.id as report_id',
       ),
     faultReports(db).where('r.site_id', siteId).orderBy('r.created_at', 'desc').limit(MOST_OF_EACH),
     packsQuery(db)
@@ -51,6 +56,7 @@ export async function serviceHistory(db: Knex, siteId: string): Promise<ServiceH
       passed: visit.outcome?.passed ?? null,
       findings: visit.outcome?.findings ?? [],
       engineerName: visit.engineer_name,
+      reportUrl: visit.report_id ? `/api/service/visits/${visit.id}/report.pdf` : null,
     })),
     ...faults.map((row): ServiceHistoryEntry => {
       const report = toFaultReport(row);

@@ -193,6 +193,19 @@ describe('the service report of a completed visit', () => {
     ).toEqual([]);
   });
 
+  it('is linked from the homeowner’s service history', async () => {
+    const { agent } = await as(world.homeowner);
+    const { body } = await agent
+      .get(`/api/my/homes/${world.own.siteId}/service-history`)
+      .expect(200);
+    const entry = body.entries.find((item: { id: string }) => item.id === visitId);
+    expect(entry).toMatchObject({
+      kind: 'visit',
+      reportUrl: `/api/service/visits/${visitId}/report.pdf`,
+    });
+    expect((await agent.get(entry.reportUrl)).status).toBe(200);
+  });
+
   it('is for the installer’s staff and the site’s homeowners only', async () => {
     expect((await download(world.office, visitId)).status).toBe(200);
     expect((await download(world.engineer, visitId)).status).toBe(200);

@@ -40,6 +40,13 @@ function EntryBody({ entry }: { entry: ServiceHistoryEntry }) {
           {entry.engineerName ? (
             <p className="text-sm text-ink-muted">Engineer: {entry.engineerName}</p>
           ) : null}
+          {entry.reportUrl ? (
+            <p>
+              <a href={entry.reportUrl} className="font-medium underline">
+                Download the service report
+              </a>
+            </p>
+          ) : null}
         </>
       );
     case 'fault_report':
