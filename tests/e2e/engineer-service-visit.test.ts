@@ -312,5 +312,21 @@ describe('service visits from the engineer’s phone to the homeowner’s histor
     const timeline = page.getByRole('list', { name: 'Service history, newest first' });
     await expect.poll(() => timeline.innerText()).toContain(description);
     await context.close();
+
+    // The report lands in the office's queue, where a call-out is booked from it.
+    const office = await browser().newContext({ viewport: { width: 1280, height: 900 } });
+    const desk = await office.newPage();
+    await signInAs(desk, db, 'office');
+    await desk.goto(`${apiUrl}/office/service`);
+    const queue = desk.getByRole('region', { name: 'Faults reported by homeowners' });
+    const row = queue.getByRole('row').filter({ hasText: description });
+    await row.waitFor();
+    await row.getByRole('button', { name: /^Book a call-out/ }).click();
+    await expect.poll(() => row.innerText()).toContain('A visit is booked');
+    const booked = await db('fault_reports').where({ id: reports[0]!.id }).first('visit_id');
+    expect(booked.visit_id).toBeTruthy();
+    visitIds.push(booked.visit_id as string);
+    expect(await wcagViolations(desk)).toEqual([]);
+    await office.close();
   });
 });

@@ -10,5 +10,6 @@ export const serviceQueryKeys = {
   schedules: () => ['service', 'visits'] as const,
   schedule: (range: object) => ['service', 'visits', range] as const,
   overdue: () => ['service', 'overdue'] as const,
+  faults: () => ['service', 'faults'] as const,
   plan: (siteId: string) => siteQueryKeys.section(siteId, 'service-plan'),
 };

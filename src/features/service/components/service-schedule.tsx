@@ -24,6 +24,7 @@ import {
 } from '@/features/service/api/get-service-schedule';
 import { BookVisitForm } from '@/features/service/components/book-visit-form';
 import type { EngineerChoice } from '@/features/service/components/move-visit-form';
+import { FaultQueue } from '@/features/service/components/fault-queue';
 import { OverdueList } from '@/features/service/components/overdue-list';
 import { VisitCalendar } from '@/features/service/components/visit-calendar';
 import { VisitDetail } from '@/features/service/components/visit-detail';
@@ -366,6 +367,7 @@ export function ServiceSchedule({
           siteHref={(siteId) => paths.sites.workspace.getHref(role, siteId)}
         />
       ) : null}
+      {isOffice ? <FaultQueue headingId="faults-heading" /> : null}
     </div>
   );
 }
