@@ -209,6 +209,26 @@ describe('the office looking after a monitored site', () => {
       note: 'Detector in the kitchen faulty; installer told.',
     });
     expect(closed.status).toBe(200);
+    // Enough earlier false alarms that police response is due to be withdrawn (NPCC: three in
+    // 12 months), so the card also says what brings it back.
+    const earlier = await db('alarm_events')
+      .where({ site_id: site.id, status: 'closed' })
+      .whereLike('outcome', 'false_alarm%')
+      .where('first_signal_at', '>', db.raw("now() - interval '12 months'"))
+      .count<{ count: string }[]>('id as count');
+    for (let extra = Number(earlier[0]!.count); extra < 3; extra += 1) {
+      await db('alarm_events').insert({
+        site_id: site.id,
+        account: site.monitoring_account,
+        category: 'burglary',
+        priority: 3,
+        status: 'closed',
+        outcome: 'false_alarm_user',
+        first_signal_at: db.raw(`now() - make_interval(days => ?)`, [20 + extra]),
+        last_signal_at: db.raw(`now() - make_interval(days => ?)`, [20 + extra]),
+        closed_at: db.raw(`now() - make_interval(days => ?)`, [20 + extra]),
+      });
+    }
     const counted = await db('alarm_events')
       .where({ site_id: site.id, status: 'closed' })
       .whereLike('outcome', 'false_alarm%')
@@ -225,6 +245,9 @@ describe('the office looking after a monitored site', () => {
       .poll(() => card.innerText())
       .toContain(`${expected} false ${expected === 1 ? 'alarm' : 'alarms'} in the last 12 months`);
     expect(await card.innerText()).toContain('False alarm: equipment fault');
+    const reinstating = card.getByRole('region', { name: 'Reinstating police response' });
+    expect(await reinstating.innerText()).toContain('Reinstating police response: not yet');
+    expect(await reinstating.innerText()).toContain('3 months free of false alarms');
     expect(await wcagViolations(page)).toEqual([]);
     await context.close();
   }, 120_000);

@@ -17,6 +17,14 @@ const siteFalseAlarmsSchema = z.object({
       closedAt: z.string().nullable(),
     }),
   ),
+  /** What brings police response back once false alarms have withdrawn it (NPCC policy). */
+  reinstatement: z.object({
+    needed: z.boolean(),
+    rule: z.string(),
+    source: z.string(),
+    met: z.boolean(),
+    items: z.array(z.object({ item: z.string(), met: z.boolean(), words: z.string() })),
+  }),
 });
 export type SiteFalseAlarms = z.infer<typeof siteFalseAlarmsSchema>;
 

@@ -1,4 +1,4 @@
-import { ShieldAlert } from 'lucide-react';
+import { Circle, CircleCheck, ShieldAlert } from 'lucide-react';
 
 import { Card } from '@/components/ui/card';
 import { FalseAlarmStanding } from '@/components/ui/false-alarm-standing';
@@ -35,6 +35,40 @@ export function SiteFalseAlarms({ siteId }: { siteId: string }) {
                 </li>
               ))}
             </ul>
+          ) : null}
+          {data.reinstatement.needed ? (
+            <section
+              aria-label="Reinstating police response"
+              className="border-t border-hairline pt-2"
+            >
+              <p className="font-medium">
+                Reinstating police response: {data.reinstatement.met ? 'ready to apply' : 'not yet'}
+              </p>
+              <p className="text-ink-muted">
+                {data.reinstatement.rule} ({data.reinstatement.source}).
+              </p>
+              <ul className="mt-1 grid gap-1">
+                {data.reinstatement.items.map((item) => (
+                  <li key={item.item} className="flex gap-2">
+                    {item.met ? (
+                      <CircleCheck
+                        aria-hidden="true"
+                        className="mt-0.5 size-4 shrink-0 text-normal"
+                      />
+                    ) : (
+                      <Circle
+                        aria-hidden="true"
+                        className="mt-0.5 size-4 shrink-0 text-ink-muted"
+                      />
+                    )}
+                    <span>
+                      <span className="sr-only">{item.met ? 'Done: ' : 'Not done: '}</span>
+                      {item.words}
+                    </span>
+                  </li>
+                ))}
+              </ul>
+            </section>
           ) : null}
         </div>
       )}
