@@ -116,10 +116,15 @@ async function queueNextKeyholder(trx: Knex, event: EventRow, afterPosition: num
   return false;
 }
 
+/**
+ * FOR NO KEY UPDATE, not FOR UPDATE: timeline and message rows that point at the event take a
+ * key-share lock on it as they are inserted, and a full update lock would make a delivery
+ * callback (message row, then event) and a reply (event, then message row) deadlock.
+ */
 async function lockEvent(trx: Knex, eventId: string): Promise<EventRow> {
   return trx('alarm_events')
     .where({ id: eventId })
-    .forUpdate()
+    .forNoKeyUpdate()
     .first(
       'id',
       'site_id',
@@ -263,7 +268,8 @@ export async function recordKeyholderReply(
   reply: KeyholderReply,
   via: 'text' | 'app',
 ): Promise<ReplyOutcome> {
-  const message = await trx('keyholder_messages').where({ id: messageId }).first();
+  // The message row first, then the event: the same order as the delivery callbacks take.
+  const message = await trx('keyholder_messages').where({ id: messageId }).forUpdate().first();
   const event = await lockEvent(trx, message.event_id);
   await trx('keyholder_messages')
     .where({ id: messageId })
