@@ -11,12 +11,12 @@ import { createSessionStore, SESSION_COOKIE } from '../server/auth/session';
 import { loadConfig } from '../server/config/config';
 import { createDb } from '../server/db/knex';
 import { migrateToLatest } from '../server/db/migrate';
-import { dropDatabase, ensureDatabase, startPostgres } from '../server/db/postgres-server';
 import { createLocalDiskStorage } from '../server/files/storage';
 import { createLogger } from '../server/http/logger';
 import { createSmtpMailer } from '../server/mail/mailer';
 import { repoRoot } from '../server/paths';
 import { benchCalculations } from './calculations';
+import { benchDatabase } from './lib/database';
 import { load, median, type LoadResult } from './lib/load';
 
 /**
@@ -194,20 +194,7 @@ async function statementsPerRequest(
 }
 
 export async function benchRecords() {
-  const config = loadConfig();
-  const postgres = await startPostgres({
-    dataDir: path.join(config.dataDir, 'postgres'),
-    port: config.postgres.port,
-  });
-  const name = `wardbook_bench_records_${process.pid}`;
-  await dropDatabase(postgres, name);
-  await ensureDatabase(postgres, name);
-  const database = {
-    host: postgres.host,
-    port: postgres.port,
-    user: postgres.user,
-    database: name,
-  };
+  const { database, finish } = await benchDatabase('records');
   const children: ChildProcess[] = [];
   try {
     const started = performance.now();
@@ -217,7 +204,7 @@ export async function benchRecords() {
     );
     const secret = randomBytes(32).toString('base64url');
     const cookie = await sessionCookie(database, userId, secret);
-    const env = { BENCH_DATABASE: name, BENCH_SESSION_SECRET: secret };
+    const env = { BENCH_DATABASE: database.database, BENCH_SESSION_SECRET: secret };
     const wardbook = await serve('wardbook', env);
     const bare = await serve('bare', env);
     children.push(wardbook.child, bare.child);
@@ -254,7 +241,6 @@ export async function benchRecords() {
     await benchCalculations(database);
   } finally {
     for (const child of children) child.kill('SIGTERM');
-    await dropDatabase(postgres, name);
-    await postgres.stop();
+    await finish();
   }
 }

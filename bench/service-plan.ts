@@ -1,8 +1,7 @@
-import pg from 'pg';
 import { servicePlan } from '../server/calc/service-plan';
 import { createDb } from '../server/db/knex';
 import { overdueSites, schedule, servicePlanForSite, ukDateOf } from '../server/service/service';
-import { createTestDatabase } from '../tests/setup/test-database';
+import { benchDatabase, timed } from './lib/database';
 import { median } from './lib/load';
 import { seedBenchData } from './records';
 
@@ -40,26 +39,8 @@ function plansPerSecond(): number {
   return count / ((performance.now() - started) / 1000);
 }
 
-async function timed<T>(work: () => Promise<T>): Promise<{ ms: number; result: T }> {
-  const started = performance.now();
-  const result = await work();
-  return { ms: performance.now() - started, result };
-}
-
-async function onServer(connection: object, sql: string): Promise<void> {
-  const client = new pg.Client({ ...connection, database: 'postgres' });
-  await client.connect();
-  try {
-    await client.query(sql);
-  } finally {
-    await client.end();
-  }
-}
-
-const { connection: testConnection, drop } = await createTestDatabase();
 // The demo seed is not wanted here: the bench company is the only one.
-const connection = { ...testConnection, database: `wardbook_bench_service_${process.pid}` };
-await onServer(connection, `create database ${pg.escapeIdentifier(connection.database)}`);
+const { database: connection, finish } = await benchDatabase('service');
 try {
   const rates = [plansPerSecond(), plansPerSecond(), plansPerSecond()];
   console.log(`Service plans (pure calculation): ${median(rates).toFixed(0)} per second`);
@@ -129,9 +110,5 @@ try {
     await db.destroy();
   }
 } finally {
-  await onServer(
-    connection,
-    `drop database if exists ${pg.escapeIdentifier(connection.database)} with (force)`,
-  );
-  await drop();
+  await finish();
 }

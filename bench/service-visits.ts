@@ -1,11 +1,10 @@
 import { randomUUID } from 'node:crypto';
-import pg from 'pg';
 import { createDb } from '../server/db/knex';
 import { faultQueue } from '../server/faults/service';
 import { completeVisit } from '../server/service/completion';
 import { serviceHistory } from '../server/service-history/service';
 import { falseAlarmRecord } from '../server/signal-history/service';
-import { createTestDatabase } from '../tests/setup/test-database';
+import { benchDatabase, timed } from './lib/database';
 import { median } from './lib/load';
 import { seedBenchData } from './records';
 
@@ -21,25 +20,8 @@ import { seedBenchData } from './records';
  */
 const RUNS = Number(process.env.BENCH_RUNS ?? 20);
 
-async function timed<T>(work: () => Promise<T>): Promise<{ ms: number; result: T }> {
-  const started = performance.now();
-  const result = await work();
-  return { ms: performance.now() - started, result };
-}
-
-async function onServer(connection: object, sql: string): Promise<void> {
-  const client = new pg.Client({ ...connection, database: 'postgres' });
-  await client.connect();
-  try {
-    await client.query(sql);
-  } finally {
-    await client.end();
-  }
-}
-
-const { connection: testConnection, drop } = await createTestDatabase();
-const connection = { ...testConnection, database: `wardbook_bench_visits_${process.pid}` };
-await onServer(connection, `create database ${pg.escapeIdentifier(connection.database)}`);
+// The demo seed is not wanted here: the bench company is the only one.
+const { database: connection, finish } = await benchDatabase('visits');
 try {
   const seeded = await seedBenchData(connection);
   const db = createDb(connection, 4);
@@ -162,9 +144,5 @@ try {
     await db.destroy();
   }
 } finally {
-  await onServer(
-    connection,
-    `drop database if exists ${pg.escapeIdentifier(connection.database)} with (force)`,
-  );
-  await drop();
+  await finish();
 }

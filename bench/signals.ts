@@ -14,7 +14,6 @@ import { stopProcess } from '../server/cli/processes';
 import { LOCAL_TWILIO_ACCOUNT_SID, LOCAL_TWILIO_FROM, loadConfig } from '../server/config/config';
 import { createDb, type DatabaseConnection } from '../server/db/knex';
 import { migrateToLatest } from '../server/db/migrate';
-import { dropDatabase, ensureDatabase, startPostgres } from '../server/db/postgres-server';
 import { createLocalDiskStorage } from '../server/files/storage';
 import { createLogger } from '../server/http/logger';
 import { createTwilioFake } from '../server/fakes/twilio/app';
@@ -25,6 +24,7 @@ import { repoRoot } from '../server/paths';
 import { createSmsSender } from '../server/sms/sender';
 import { everydaySignal, isAckFor, openPanelLink, type PanelLink } from '../tests/setup/panel-link';
 import { freePort, startReceiverProcess } from '../tests/setup/receiver-process';
+import { benchDatabase } from './lib/database';
 import { median, percentile } from './lib/load';
 import { sessionCookie } from './records';
 
@@ -509,20 +509,7 @@ async function benchSignalToSms(
 }
 
 export async function benchSignals(): Promise<void> {
-  const config = loadConfig();
-  const postgres = await startPostgres({
-    dataDir: path.join(config.dataDir, 'postgres'),
-    port: config.postgres.port,
-  });
-  const name = `wardbook_bench_signals_${process.pid}`;
-  await dropDatabase(postgres, name);
-  await ensureDatabase(postgres, name);
-  const database = {
-    host: postgres.host,
-    port: postgres.port,
-    user: postgres.user,
-    database: name,
-  };
+  const { database, finish } = await benchDatabase('signals');
   const db = createDb(database, 4);
   const stops: (() => Promise<unknown> | void)[] = [];
   try {
@@ -542,8 +529,7 @@ export async function benchSignals(): Promise<void> {
   } finally {
     for (const stop of stops.reverse()) await stop();
     await db.destroy();
-    await dropDatabase(postgres, name);
-    await postgres.stop();
+    await finish();
   }
 }
 
