@@ -84,22 +84,40 @@ export async function sendServiceReminders(deps: ReminderDeps, today: string) {
     return planFacts(trx, { installerIds });
   });
 
+  // Who hears about which site, read once for the pass rather than once per site.
+  const [installers, officeStaff, homeownerRows] = await Promise.all([
+    db('sites as s')
+      .join('organisations as i', 'i.id', 's.installer_id')
+      .whereIn('s.installer_id', installerIds)
+      .select('s.id as site_id', 's.installer_id', 'i.name as installer_name'),
+    db('memberships as m')
+      .join('users as u', 'u.id', 'm.user_id')
+      .whereIn('m.organisation_id', installerIds)
+      .where('m.role', 'office')
+      .select('m.organisation_id', 'u.email', 'u.display_name'),
+    db('site_homeowners as h')
+      .join('users as u', 'u.id', 'h.user_id')
+      .select('h.site_id', 'u.email', 'u.display_name', 'u.phone'),
+  ]);
+  const siteInstaller = new Map(installers.map((site) => [site.site_id as string, site]));
+  const groupBy = <T extends Record<string, unknown>>(items: T[], key: string) => {
+    const groups = new Map<string, T[]>();
+    for (const item of items)
+      groups.set(item[key] as string, [...(groups.get(item[key] as string) ?? []), item]);
+    return groups;
+  };
+  const officeOf = groupBy(officeStaff, 'organisation_id');
+  const homeownersOf = groupBy(homeownerRows, 'site_id');
+
   for (const row of rows) {
     const plan = planOf(row, today);
     if (!plan.nextDueOn) continue;
     const daysToGo = daysBetween(today, plan.nextDueOn);
-    const site = await db('sites as s')
-      .join('organisations as i', 'i.id', 's.installer_id')
-      .where('s.id', row.site_id)
-      .first('s.installer_id', 'i.name as installer_name');
+    const site = siteInstaller.get(row.site_id)!;
     const count = (outcome: 'sent' | 'failed' | 'already') => (tally[outcome] += 1);
 
     if (plan.overdue) {
-      const office: { email: string; display_name: string }[] = await db('memberships as m')
-        .join('users as u', 'u.id', 'm.user_id')
-        .where({ 'm.organisation_id': site.installer_id, 'm.role': 'office' })
-        .select('u.email', 'u.display_name');
-      for (const person of office) {
+      for (const person of officeOf.get(site.installer_id) ?? []) {
         count(
           await once(
             deps,
@@ -134,16 +152,10 @@ export async function sendServiceReminders(deps: ReminderDeps, today: string) {
     }
 
     if (daysToGo < 0 || daysToGo > DUE_SOON_DAYS) continue;
-    const homeowners: { email: string; display_name: string; phone: string | null }[] = await db(
-      'site_homeowners as h',
-    )
-      .join('users as u', 'u.id', 'h.user_id')
-      .where('h.site_id', row.site_id)
-      .select('u.email', 'u.display_name', 'u.phone');
     const booked = plan.bookedVisit
       ? `It is booked for ${dayOf(plan.bookedVisit.dueDate)}.`
       : `${site.installer_name} will be in touch to book it.`;
-    for (const person of homeowners) {
+    for (const person of homeownersOf.get(row.site_id) ?? []) {
       const key = { siteId: row.site_id, kind: 'visit_due_soon' as const, dueDate: plan.nextDueOn };
       count(
         await once(deps, { ...key, channel: 'email', recipient: person.email }, () =>
